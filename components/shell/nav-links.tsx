@@ -1,0 +1,30 @@
+"use client";
+
+import Link from "next/link";
+import { usePathname } from "next/navigation";
+import { cn } from "@/lib/cn";
+import { navItems } from "./nav-items";
+
+export function NavLinks() {
+  const pathname = usePathname();
+  return (
+    <nav aria-label="Sections" className="flex gap-1">
+      {navItems.map((item) => {
+        const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
+        return (
+          <Link
+            key={item.href}
+            href={item.href}
+            aria-current={active ? "page" : undefined}
+            className={cn(
+              "rounded-md px-3 py-1.5 text-sm font-semibold text-cocoa-700 hover:bg-cream-deep",
+              active && "bg-pod-light text-pod-dark",
+            )}
+          >
+            {item.label}
+          </Link>
+        );
+      })}
+    </nav>
+  );
+}

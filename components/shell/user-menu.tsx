@@ -1,0 +1,43 @@
+"use client";
+
+import * as Menu from "@radix-ui/react-dropdown-menu";
+import { signOutAction } from "@/app/(app)/actions";
+
+export function UserMenu({ name, email, role }: { name: string; email: string; role: string }) {
+  const initials = name
+    .split(/\s+/)
+    .map((p) => p[0])
+    .join("")
+    .slice(0, 2)
+    .toUpperCase();
+  return (
+    <Menu.Root>
+      <Menu.Trigger
+        aria-label={`Account menu for ${name}`}
+        className="flex h-9 w-9 items-center justify-center rounded-full bg-cocoa text-sm font-bold text-cream"
+      >
+        {initials}
+      </Menu.Trigger>
+      <Menu.Portal>
+        <Menu.Content align="end" sideOffset={6} className="z-50 w-64 rounded-lg border border-sand bg-white p-1 shadow-card">
+          <div className="px-3 py-2">
+            <p className="font-semibold">{name}</p>
+            <p className="text-sm text-cocoa-500">{email}</p>
+            <p className="mt-1 text-xs uppercase tracking-wide text-pod-dark">{role}</p>
+          </div>
+          <Menu.Separator className="my-1 h-px bg-sand" />
+          <form action={signOutAction}>
+            <Menu.Item asChild>
+              <button
+                type="submit"
+                className="w-full rounded-md px-3 py-2 text-left text-sm outline-none data-[highlighted]:bg-cream-deep"
+              >
+                Sign out
+              </button>
+            </Menu.Item>
+          </form>
+        </Menu.Content>
+      </Menu.Portal>
+    </Menu.Root>
+  );
+}

@@ -1,0 +1,3 @@
+export * from "./workspaces";
+export * from "./users";
+export * from "./sessions";

@@ -1,0 +1,38 @@
+import "server-only";
+import { redirect } from "next/navigation";
+import { cache } from "react";
+import type { Role } from "@/db/schema";
+import { getMembership, listMembershipsForUser } from "@/lib/data/memberships";
+import { getCurrentSession } from "./session";
+
+export type Viewer = {
+  user: { id: string; email: string; name: string };
+  workspace: { id: string; name: string };
+  role: Role;
+};
+
+/**
+ * The signed-in user in their active workspace (from the session, never from
+ * the request), or null. Falls back to the first workspace they belong to.
+ */
+export const getViewer = cache(async (): Promise<Viewer | null> => {
+  const { user, session } = await getCurrentSession();
+  if (!user || !session) return null;
+  let membership = session.activeWorkspaceId
+    ? await getMembership({ userId: user.id, workspaceId: session.activeWorkspaceId })
+    : null;
+  if (!membership) membership = (await listMembershipsForUser({ userId: user.id }))[0] ?? null;
+  if (!membership) return null;
+  return {
+    user: { id: user.id, email: user.email, name: user.name },
+    workspace: { id: membership.workspaceId, name: membership.workspaceName },
+    role: membership.role,
+  };
+});
+
+/** For pages of the signed-in app: the viewer, or a redirect to sign-in. */
+export async function requireViewer(): Promise<Viewer> {
+  const viewer = await getViewer();
+  if (!viewer) redirect("/sign-in");
+  return viewer;
+}

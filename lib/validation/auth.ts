@@ -1,0 +1,10 @@
+import { z } from "zod";
+
+export const signInSchema = z
+  .object({
+    email: z.string().trim().toLowerCase().email("Enter the e-mail address you signed up with."),
+    password: z.string().min(1, "Enter your password.").max(256, "That password is too long."),
+  })
+  .strict();
+
+export type SignInInput = z.infer<typeof signInSchema>;

@@ -1,0 +1,28 @@
+import { mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { chromium, type BrowserContext } from "playwright-core";
+
+/** Debian's chromium, driven by playwright-core; no browser is ever downloaded. */
+export const CHROMIUM_PATH = process.env.BARWRIGHT_CHROMIUM ?? "/usr/bin/chromium";
+
+/** Flags for a closed network and a root user (see DEVELOPERS.md). */
+export const CHROMIUM_ARGS = [
+  "--headless",
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
+
+/** A fresh browser profile per call, so no cookie leaks between tests. */
+export async function launchBrowser(): Promise<BrowserContext> {
+  return chromium.launchPersistentContext(mkdtempSync(path.join(tmpdir(), "barwright-e2e-")), {
+    executablePath: CHROMIUM_PATH,
+    args: CHROMIUM_ARGS,
+    viewport: { width: 1280, height: 900 },
+  });
+}
