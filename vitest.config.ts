@@ -11,7 +11,12 @@ const root = fileURLToPath(new URL(".", import.meta.url));
  */
 export default defineConfig({
   plugins: [react()],
-  resolve: { alias: { "@": root } },
+  resolve: {
+    alias: {
+      "@": root,
+      "server-only": `${root}tests/support/server-only.ts`,
+    },
+  },
   test: {
     projects: [
       {
@@ -29,6 +34,13 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/integration/global-setup.ts"],
+          env: {
+            DATABASE_URL: "postgres://postgres@127.0.0.1:54339/barwright_test",
+            BARWRIGHT_PG_PORT: "54339",
+            BARWRIGHT_PG_DIR: ".data/pg-integration",
+            BARWRIGHT_PG_DB: "barwright_test",
+            BARWRIGHT_PG_FAST: "1",
+          },
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,

@@ -6,6 +6,7 @@
 #   scripts/db.sh status    say whether it runs
 #   scripts/db.sh destroy   stop and delete the data folder (used for throw-away test clusters)
 #   scripts/db.sh url       print the DATABASE_URL for this cluster
+#   scripts/db.sh install   only make sure the server binaries are installed
 #
 # Settings (environment): BARWRIGHT_PG_PORT (default 54329), BARWRIGHT_PG_DIR (default .data/pg),
 # BARWRIGHT_PG_DB (default barwright), BARWRIGHT_PG_FAST=1 (fsync off: test clusters only).
@@ -135,5 +136,6 @@ case "${1:-}" in
   status) cmd_status ;;
   destroy) cmd_destroy ;;
   url) cmd_url ;;
-  *) echo "usage: scripts/db.sh start|stop|status|destroy|url" >&2; exit 2 ;;
+  install) ensure_installed; ensure_os_user ;;
+  *) echo "usage: scripts/db.sh start|stop|status|destroy|url|install" >&2; exit 2 ;;
 esac

@@ -1,9 +1,11 @@
 "use client";
 
 import * as Menu from "@radix-ui/react-dropdown-menu";
+import { useTransition } from "react";
 import { signOutAction } from "@/app/(app)/actions";
 
 export function UserMenu({ name, email, role }: { name: string; email: string; role: string }) {
+  const [signingOut, startSignOut] = useTransition();
   const initials = name
     .split(/\s+/)
     .map((p) => p[0])
@@ -26,16 +28,13 @@ export function UserMenu({ name, email, role }: { name: string; email: string; r
             <p className="mt-1 text-xs uppercase tracking-wide text-pod-dark">{role}</p>
           </div>
           <Menu.Separator className="my-1 h-px bg-sand" />
-          <form action={signOutAction}>
-            <Menu.Item asChild>
-              <button
-                type="submit"
-                className="w-full rounded-md px-3 py-2 text-left text-sm outline-none data-[highlighted]:bg-cream-deep"
-              >
-                Sign out
-              </button>
-            </Menu.Item>
-          </form>
+          <Menu.Item
+            disabled={signingOut}
+            onSelect={() => startSignOut(() => signOutAction())}
+            className="cursor-pointer rounded-md px-3 py-2 text-sm outline-none data-[highlighted]:bg-cream-deep"
+          >
+            {signingOut ? "Signing out…" : "Sign out"}
+          </Menu.Item>
         </Menu.Content>
       </Menu.Portal>
     </Menu.Root>

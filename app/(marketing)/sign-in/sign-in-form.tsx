@@ -12,7 +12,7 @@ export function SignInForm() {
   return (
     <form action={action} className="flex flex-col gap-5" noValidate>
       {state && !state.ok && state.message ? (
-        <p role="alert" className="rounded-lg bg-brick-light px-3 py-2 text-sm text-brick">
+        <p role="alert" data-testid="form-error" className="rounded-lg bg-brick-light px-3 py-2 text-sm text-brick">
           {state.message}
         </p>
       ) : null}

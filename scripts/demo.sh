@@ -1,0 +1,22 @@
+#!/usr/bin/env bash
+# The start command's second half: database up, migrated, demo seeded, app built and served.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+export NEXT_TELEMETRY_DISABLED=1
+PORT=${PORT:-3000}
+
+if (exec 3<>"/dev/tcp/127.0.0.1/$PORT") 2>/dev/null; then
+  echo "demo: port $PORT on 127.0.0.1 is already in use (another Barwright?). Stop that program, or run PORT=3001 npm run demo." >&2
+  exit 1
+fi
+
+scripts/db.sh start
+npx tsx scripts/migrate.ts
+npx tsx scripts/seed.ts
+echo "demo: building the production app…"
+node node_modules/next/dist/bin/next build >.data/build.log 2>&1 || { tail -n 40 .data/build.log >&2; echo "demo: the build failed (full log: .data/build.log)." >&2; exit 1; }
+echo
+echo "  Barwright is at http://127.0.0.1:$PORT"
+echo "  Ctrl-C stops the app; 'npm run db:stop' stops the database."
+echo
+exec node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT"

@@ -1,0 +1,51 @@
+import { execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { clusterEnv, clusterUrl, dbScript, migrateCluster } from "../support/clusters";
+import { E2E_BASE_URL, E2E_PORT } from "./config";
+
+/**
+ * A throw-away cluster with the demo seed, the production build, and `next start`
+ * on loopback. Set BARWRIGHT_E2E_SKIP_BUILD=1 to reuse an existing .next build.
+ */
+export default async function setup() {
+  dbScript("e2e", "destroy");
+  dbScript("e2e", "start");
+  migrateCluster("e2e");
+  execFileSync("npx", ["tsx", "scripts/seed.ts"], { env: clusterEnv("e2e"), stdio: "inherit" });
+  const env = { ...clusterEnv("e2e"), DATABASE_URL: clusterUrl("e2e"), NEXT_TELEMETRY_DISABLED: "1" };
+  if (process.env.BARWRIGHT_E2E_SKIP_BUILD !== "1") {
+    console.log("e2e: building the production app…");
+    try {
+      execFileSync("node", ["node_modules/next/dist/bin/next", "build"], { env, stdio: "pipe", encoding: "utf8" });
+    } catch (err) {
+      const e = err as { stdout?: string; stderr?: string };
+      console.error(`${e.stdout ?? ""}${e.stderr ?? ""}`);
+      throw new Error("e2e: next build failed (output above)");
+    }
+  }
+  const server = spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(E2E_PORT)], {
+    env,
+    stdio: ["ignore", "ignore", "inherit"],
+  });
+  await waitForHealth(server);
+  console.log(`e2e: app on ${E2E_BASE_URL}`);
+  return async () => {
+    server.kill("SIGTERM");
+    await new Promise((r) => setTimeout(r, 300));
+    dbScript("e2e", "destroy");
+  };
+}
+
+async function waitForHealth(server: ChildProcess): Promise<void> {
+  for (let i = 0; i < 120; i++) {
+    if (server.exitCode !== null) throw new Error(`e2e: next start exited with code ${server.exitCode}`);
+    try {
+      const res = await fetch(`${E2E_BASE_URL}/api/health`);
+      if (res.ok) return;
+    } catch {
+      /* not listening yet */
+    }
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  server.kill("SIGTERM");
+  throw new Error("e2e: the app did not become healthy within 60 s");
+}

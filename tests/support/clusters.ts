@@ -1,0 +1,39 @@
+import { execFileSync } from "node:child_process";
+
+/**
+ * Throw-away PostgreSQL clusters for the test run: each kind of test has its own
+ * port and data folder, created by its global setup and removed afterwards.
+ */
+export const clusters = {
+  integration: { port: 54339, dir: ".data/pg-integration", db: "barwright_test" },
+  e2e: { port: 54349, dir: ".data/pg-e2e", db: "barwright_e2e" },
+} as const;
+
+export type ClusterName = keyof typeof clusters;
+
+export function clusterUrl(name: ClusterName): string {
+  const c = clusters[name];
+  return `postgres://postgres@127.0.0.1:${c.port}/${c.db}`;
+}
+
+/** Environment for scripts that act on a cluster (never an inherited DATABASE_URL). */
+export function clusterEnv(name: ClusterName): NodeJS.ProcessEnv {
+  const c = clusters[name];
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    BARWRIGHT_PG_PORT: String(c.port),
+    BARWRIGHT_PG_DIR: c.dir,
+    BARWRIGHT_PG_DB: c.db,
+    BARWRIGHT_PG_FAST: "1",
+  };
+  delete env.DATABASE_URL;
+  return env;
+}
+
+export function dbScript(name: ClusterName, command: "start" | "stop" | "destroy"): void {
+  execFileSync("bash", ["scripts/db.sh", command], { env: clusterEnv(name), stdio: "inherit" });
+}
+
+export function migrateCluster(name: ClusterName): void {
+  execFileSync("npx", ["tsx", "scripts/migrate.ts"], { env: clusterEnv(name), stdio: "inherit" });
+}
