@@ -45,7 +45,7 @@ ensure_installed() {
     || echo 'create_main_cluster = false' >> /etc/postgresql-common/createcluster.conf
   DEBIAN_FRONTEND=noninteractive apt-get update -qq >/dev/null \
     || fail "apt-get update failed: check the network, or install postgresql yourself."
-  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq postgresql >/dev/null \
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq -o Dpkg::Options::=--force-confdef -o Dpkg::Options::=--force-confold postgresql >/dev/null \
     || fail "apt-get install postgresql failed: see the message above."
   find_bindir || fail "postgresql was installed but initdb was not found under /usr/lib/postgresql/*/bin."
 }
