@@ -1,0 +1,26 @@
+/**
+ * Barwright's formulation engine: pure, deterministic functions over recipes. No I/O, no clock,
+ * no randomness; imports only decimal.js and its own files.
+ */
+export * from "./types";
+export * from "./quantities";
+export * from "./warnings";
+export { toDecimalString, readDecimal, type ReadResult, type ReadProblem } from "./decimal";
+export * from "./evaluate";
+export type { EvaluateOptions } from "./evaluate-options";
+export type { CodexOptions } from "./codex-settings";
+export { DEFAULT_CODEX_SETTINGS } from "./codex-settings";
+export type { CompositionFigures, BaseFigures } from "./figures";
+export type { StandardCheck, StandardResult } from "./standards";
+export * from "./rebalance";
+export * from "./normalize";
+export { DEFAULT_PERCENT_RESOLUTION } from "./resolution";
+export * from "./reference/standards";
+export * from "./solve-for-target";
+export type { SolveBasis, TargetDirection } from "./target-terms";
+export * from "./scale-batch";
+export * from "./cost";
+export * from "./money";
+export * from "./check-standards";
+export * from "./reference/ingredients";
+export { dairyComposition, cocoaComposition, type NutrientsPer100g } from "./reference/derive";
