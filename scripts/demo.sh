@@ -15,8 +15,22 @@ npx tsx scripts/migrate.ts
 npx tsx scripts/seed.ts
 echo "demo: building the production app…"
 node node_modules/next/dist/bin/next build >.data/build.log 2>&1 || { tail -n 40 .data/build.log >&2; echo "demo: the build failed (full log: .data/build.log)." >&2; exit 1; }
+# The demo's e-mail goes to a local SMTP sink; owners read it under Mailbox.
+export BARWRIGHT_SMTP_PORT=${BARWRIGHT_SMTP_PORT:-2525}
+export BARWRIGHT_SMTP_URL="smtp://127.0.0.1:$BARWRIGHT_SMTP_PORT"
+export BARWRIGHT_MAILBOX_DIR=${BARWRIGHT_MAILBOX_DIR:-$PWD/.data/mailbox}
+export BARWRIGHT_DEMO_MAILBOX=1
+node --import tsx scripts/mail-sink.ts &
+SINK=$!
+trap 'kill $SINK 2>/dev/null' EXIT
+for _ in $(seq 1 50); do
+  (exec 3<>"/dev/tcp/127.0.0.1/$BARWRIGHT_SMTP_PORT") 2>/dev/null && break
+  kill -0 $SINK 2>/dev/null || { echo "demo: the mail sink did not start (see above)." >&2; exit 1; }
+  sleep 0.2
+done
+
 echo
 echo "  Barwright is at http://127.0.0.1:$PORT"
 echo "  Ctrl-C stops the app; 'npm run db:stop' stops the database."
 echo
-exec node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT"
+node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT"

@@ -1,18 +1,34 @@
 import { Wordmark } from "@/components/brand/wordmark";
 import type { Viewer } from "@/lib/auth/current";
+import { can } from "@/lib/auth/permissions";
+import { listMembershipsForUser } from "@/lib/data/memberships";
+import { mailboxEnabled } from "@/lib/mail/mailbox";
+import { navItems } from "./nav-items";
 import { NavLinks } from "./nav-links";
 import { UserMenu } from "./user-menu";
+import { WorkspaceSwitcher } from "./workspace-switcher";
 
-export function AppHeader({ viewer }: { viewer: Viewer }) {
+export async function AppHeader({ viewer }: { viewer: Viewer }) {
+  const items = navItems
+    .filter((i) => can(viewer.role, i.permission) && (!i.demoOnly || mailboxEnabled()))
+    .map(({ href, label }) => ({ href, label }));
+  const workspaces = await listMembershipsForUser({ userId: viewer.user.id });
   return (
     <header className="border-b border-sand bg-white/70 backdrop-blur">
       <div className="mx-auto flex max-w-page items-center gap-8 px-gutter py-3">
         <Wordmark href="/overview" />
-        <NavLinks />
+        <NavLinks items={items} />
         <div className="ml-auto flex items-center gap-4">
-          <span className="hidden text-sm text-cocoa-500 md:inline" data-testid="workspace-name">
-            {viewer.workspace.name}
-          </span>
+          {workspaces.length > 1 ? (
+            <WorkspaceSwitcher
+              current={viewer.workspace.id}
+              workspaces={workspaces.map((w) => ({ value: w.workspaceId, label: w.workspaceName }))}
+            />
+          ) : (
+            <span className="hidden text-sm text-cocoa-500 md:inline" data-testid="workspace-name">
+              {viewer.workspace.name}
+            </span>
+          )}
           <UserMenu name={viewer.user.name} email={viewer.user.email} role={viewer.role} />
         </div>
       </div>

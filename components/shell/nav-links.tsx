@@ -3,13 +3,12 @@
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { cn } from "@/lib/cn";
-import { navItems } from "./nav-items";
 
-export function NavLinks() {
+export function NavLinks({ items }: { items: ReadonlyArray<{ href: string; label: string }> }) {
   const pathname = usePathname();
   return (
     <nav aria-label="Sections" className="flex gap-1">
-      {navItems.map((item) => {
+      {items.map((item) => {
         const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
         return (
           <Link

@@ -1,6 +1,7 @@
 "use client";
 
 import * as Menu from "@radix-ui/react-dropdown-menu";
+import Link from "next/link";
 import { useTransition } from "react";
 import { signOutAction } from "@/app/(app)/actions";
 
@@ -28,6 +29,11 @@ export function UserMenu({ name, email, role }: { name: string; email: string; r
             <p className="mt-1 text-xs uppercase tracking-wide text-pod-dark">{role}</p>
           </div>
           <Menu.Separator className="my-1 h-px bg-sand" />
+          <Menu.Item asChild>
+            <Link href="/settings/account" className="block rounded-md px-3 py-2 text-sm outline-none data-[highlighted]:bg-cream-deep">
+              Your account
+            </Link>
+          </Menu.Item>
           <Menu.Item
             disabled={signingOut}
             onSelect={() => startSignOut(() => signOutAction())}

@@ -1,3 +1,4 @@
 export * from "./workspaces";
 export * from "./users";
 export * from "./sessions";
+export * from "./invitations";

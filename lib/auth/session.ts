@@ -1,23 +1,16 @@
 import "server-only";
-import { createHash, randomBytes } from "node:crypto";
 import { cookies } from "next/headers";
 import { cache } from "react";
 import { lucia } from "./lucia";
 import { authSettings } from "./settings";
+import { generateToken, hashToken } from "./tokens";
 
-/** A random token for the cookie: 160 bits from the OS CSPRNG, as base64url. */
-export function generateSessionToken(): string {
-  return randomBytes(20).toString("base64url");
-}
-
-/** The database session id for a token: hex SHA-256, so a leaked table holds no usable token. */
-export function sessionIdFromToken(token: string): string {
-  return createHash("sha256").update(token).digest("hex");
-}
+/** The database session id for a cookie's token. */
+export const sessionIdFromToken = hashToken;
 
 /** Creates a fresh session (a new one at every sign-in) and sets its cookie. */
 export async function startSession(userId: string, activeWorkspaceId: string | null): Promise<void> {
-  const token = generateSessionToken();
+  const token = generateToken();
   await lucia.createSession(userId, { activeWorkspaceId, createdAt: new Date() }, { sessionId: sessionIdFromToken(token) });
   const cookie = lucia.createSessionCookie(token);
   (await cookies()).set(cookie.name, cookie.value, cookie.attributes);
@@ -47,6 +40,11 @@ export const getCurrentSession = cache(async () => {
   }
   return result;
 });
+
+/** Deletes every session of a user: sign out everywhere, password change, removal. */
+export async function endAllSessionsOf(userId: string): Promise<void> {
+  await lucia.invalidateUserSessions(userId);
+}
 
 /** Ends this request's session and clears the cookie. */
 export async function endCurrentSession(): Promise<void> {

@@ -2,6 +2,7 @@ import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, users, workspaces, type Role } from "@/db/schema";
+import { conflict, notFound } from "@/lib/errors";
 
 export type WorkspaceMembership = { workspaceId: string; workspaceName: string; role: Role };
 
@@ -43,4 +44,43 @@ export async function listMembers({ workspaceId }: { workspaceId: string }): Pro
     .orderBy(asc(users.name));
   const order: Role[] = ["owner", "formulator", "buyer", "production", "viewer"];
   return rows.sort((a, b) => order.indexOf(a.role) - order.indexOf(b.role));
+}
+
+async function ownerCount(workspaceId: string): Promise<number> {
+  const rows = await db
+    .select({ id: memberships.id })
+    .from(memberships)
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.role, "owner")));
+  return rows.length;
+}
+
+/** Changes a member's role; a workspace always keeps at least one owner. */
+export async function changeMemberRole({
+  workspaceId,
+  userId,
+  role,
+}: {
+  workspaceId: string;
+  userId: string;
+  role: Role;
+}): Promise<void> {
+  const current = await getMembership({ userId, workspaceId });
+  if (!current) throw notFound("That member");
+  if (current.role === "owner" && role !== "owner" && (await ownerCount(workspaceId)) <= 1) {
+    throw conflict("A workspace needs at least one owner. Make someone else owner first.");
+  }
+  await db
+    .update(memberships)
+    .set({ role })
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+}
+
+/** Removes a member from a workspace; the last owner cannot be removed. */
+export async function removeMember({ workspaceId, userId }: { workspaceId: string; userId: string }): Promise<void> {
+  const current = await getMembership({ userId, workspaceId });
+  if (!current) throw notFound("That member");
+  if (current.role === "owner" && (await ownerCount(workspaceId)) <= 1) {
+    throw conflict("The last owner cannot be removed.");
+  }
+  await db.delete(memberships).where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
 }

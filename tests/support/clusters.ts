@@ -37,3 +37,9 @@ export function dbScript(name: ClusterName, command: "start" | "stop" | "destroy
 export function migrateCluster(name: ClusterName): void {
   execFileSync("npx", ["tsx", "scripts/migrate.ts"], { env: clusterEnv(name), stdio: "inherit" });
 }
+
+/** Local SMTP sinks for the test run (one per kind of test). */
+export const mailSinks = {
+  integration: { port: 2535, dir: ".data/mailbox-integration" },
+  e2e: { port: 2545, dir: ".data/mailbox-e2e" },
+} as const;

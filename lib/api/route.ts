@@ -1,0 +1,75 @@
+import "server-only";
+import { NextResponse } from "next/server";
+import type { z } from "zod";
+import { fieldErrorsOf } from "@/lib/actions/define-action";
+import { authorize } from "@/lib/auth/authorize";
+import type { Viewer } from "@/lib/auth/current";
+import type { Permission } from "@/lib/auth/permissions";
+import { AppError, httpStatus, isDatabaseUnavailable } from "@/lib/errors";
+
+type RouteContext = { params: Promise<Record<string, string | string[] | undefined>> };
+
+/** JSON error body: `{ error: { code, message, fieldErrors? } }`. */
+export function jsonError(status: number, code: string, message: string, fieldErrors?: Record<string, string[] | undefined>) {
+  return NextResponse.json({ error: { code, message, ...(fieldErrors ? { fieldErrors } : {}) } }, { status });
+}
+
+/**
+ * A signed-in JSON route handler: same-origin check for methods that change
+ * data (CSRF), session and permission (401/403), input parsed with zod from the
+ * query (GET) or the JSON body (422 on bad input, 400 on malformed JSON), then
+ * the handler. AppErrors map to their status; a lost database to 503.
+ */
+export function apiRoute<S extends z.ZodType>(opts: {
+  permission: Permission;
+  schema: S;
+  handler: (ctx: { input: z.infer<S>; viewer: Viewer; params: Record<string, string | string[] | undefined>; request: Request }) => Promise<unknown>;
+}) {
+  return async (request: Request, context: RouteContext): Promise<Response> => {
+    const mutates = !["GET", "HEAD"].includes(request.method);
+    if (mutates && !isSameOrigin(request)) {
+      return jsonError(403, "cross_origin", "Requests that change data must come from Barwright itself.");
+    }
+    try {
+      const viewer = await authorize(opts.permission);
+      let raw: unknown;
+      if (mutates) {
+        try {
+          raw = await request.json();
+        } catch {
+          return jsonError(400, "malformed", "The request body is not valid JSON.");
+        }
+      } else {
+        raw = Object.fromEntries(new URL(request.url).searchParams);
+      }
+      const parsed = opts.schema.safeParse(raw);
+      if (!parsed.success) return jsonError(422, "invalid", "The request has invalid fields.", fieldErrorsOf(parsed.error));
+      const params = (await context.params) ?? {};
+      const data = await opts.handler({ input: parsed.data, viewer, params, request });
+      return NextResponse.json(data, { headers: { "cache-control": "no-store" } });
+    } catch (err) {
+      if (err instanceof AppError) return jsonError(httpStatus[err.code], err.code, err.message, err.fieldErrors);
+      if (isDatabaseUnavailable(err)) return jsonError(503, "unavailable", "The database is not answering; try again shortly.");
+      console.error("route handler failed:", err);
+      return jsonError(500, "error", "Something went wrong on our side.");
+    }
+  };
+}
+
+/**
+ * CSRF defence for route handlers (server actions get Next.js's own Origin
+ * check): a browser's Sec-Fetch-Site must say same-origin, and an Origin header,
+ * when present, must match the Host the request was sent to.
+ */
+export function isSameOrigin(request: Request): boolean {
+  const site = request.headers.get("sec-fetch-site");
+  if (site && site !== "same-origin" && site !== "none") return false;
+  const origin = request.headers.get("origin");
+  if (!origin) return true;
+  const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host");
+  try {
+    return new URL(origin).host === host;
+  } catch {
+    return false;
+  }
+}
