@@ -86,13 +86,3 @@ export function sumRecipe(lines: readonly ParsedLine[]): RecipeSums {
     },
   };
 }
-
-/**
- * A quantity as a percentage of a basis: `quantities[q] / baseMass[basis]`.
- * Returns 0 when the basis has no mass (empty recipe, all inclusions, all water).
- */
-export function percentOnBasis(sums: RecipeSums, quantity: StandardQuantity, basis: Basis): Decimal {
-  const mass = sums.baseMass[basis];
-  if (!mass.isPositive() || mass.isZero()) return ZERO;
-  return sums.quantities[quantity].div(mass);
-}

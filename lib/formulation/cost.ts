@@ -43,13 +43,29 @@ export type CostResult =
     }
   | { ok: false; reason: string; missingPriceLines?: number[] };
 
-type Read = { value: Decimal } | { reason: string };
+type Amounts = Record<"bar" | "loss" | "packaging" | "labourBar" | "labourKg" | "overheadKg", Decimal>;
 
-function readMoney(input: unknown, name: string, required = false): Read {
-  const read = readDecimal(input);
-  if (!read.ok && read.problem === "missing" && !required) return { value: ZERO };
-  if (!read.ok || read.value.isNegative()) return { reason: `${name} ${describeInput(input)} must be a number of at least 0.` };
-  return { value: read.value };
+const OPTION_NAMES: ReadonlyArray<[keyof Amounts, keyof CostOptions, string]> = [
+  ["bar", "barMassGrams", "The bar mass"],
+  ["loss", "processLossPercent", "The process loss"],
+  ["packaging", "packagingPerBar", "Packaging per bar"],
+  ["labourBar", "labourPerBar", "Labour per bar"],
+  ["labourKg", "labourPerKg", "Labour per kg"],
+  ["overheadKg", "overheadPerKg", "Overhead per kg"],
+];
+
+/** Reads the amounts of CostOptions: each a number ≥ 0, missing = 0 (the bar mass is required). */
+function readAmounts(options: Partial<CostOptions>): Amounts | string {
+  const amounts = {} as Amounts;
+  for (const [key, option, name] of OPTION_NAMES) {
+    const read = readDecimal(options[option]);
+    if (!read.ok && read.problem === "missing" && key !== "bar") amounts[key] = ZERO;
+    else if (!read.ok || read.value.isNegative()) return `${name} ${describeInput(options[option])} must be a number of at least 0.`;
+    else amounts[key] = read.value;
+  }
+  if (amounts.bar.isZero()) return "The bar mass must be above 0 g.";
+  if (amounts.loss.gte(HUNDRED)) return "The process loss must be below 100 %.";
+  return amounts;
 }
 
 /**
@@ -71,18 +87,8 @@ export function costRecipe(lines: readonly RecipeLine[], options: CostOptions): 
     };
   }
   const o: Partial<CostOptions> = typeof options === "object" && options !== null ? options : {};
-  const reads = {
-    bar: readMoney(o.barMassGrams, "The bar mass", true),
-    loss: readMoney(o.processLossPercent, "The process loss"),
-    packaging: readMoney(o.packagingPerBar, "Packaging per bar"),
-    labourBar: readMoney(o.labourPerBar, "Labour per bar"),
-    labourKg: readMoney(o.labourPerKg, "Labour per kg"),
-    overheadKg: readMoney(o.overheadPerKg, "Overhead per kg"),
-  };
-  for (const read of Object.values(reads)) if ("reason" in read) return { ok: false, reason: read.reason };
-  const v = Object.fromEntries(Object.entries(reads).map(([k, r]) => [k, (r as { value: Decimal }).value])) as Record<keyof typeof reads, Decimal>;
-  if (v.bar.isZero()) return { ok: false, reason: "The bar mass must be above 0 g." };
-  if (v.loss.gte(HUNDRED)) return { ok: false, reason: "The process loss must be below 100 %." };
+  const v = readAmounts(o);
+  if (typeof v === "string") return { ok: false, reason: v };
   const barKg = v.bar.div(1000);
   const finished = cost.perKg.times(HUNDRED).div(HUNDRED.minus(v.loss));
   const parts = {

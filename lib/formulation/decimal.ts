@@ -38,7 +38,8 @@ export const OUTPUT_SIGNIFICANT_DIGITS = 34;
  */
 export function toDecimalString(value: Decimal): string {
   if (value.isZero()) return "0";
-  return value.toSignificantDigits(OUTPUT_SIGNIFICANT_DIGITS).toFixed();
+  const short = value.sd() <= OUTPUT_SIGNIFICANT_DIGITS ? value : value.toSignificantDigits(OUTPUT_SIGNIFICANT_DIGITS);
+  return short.toFixed();
 }
 
 /** Why an input could not be read as a decimal. */
@@ -59,6 +60,28 @@ const MAX_TEXT_LENGTH = 200;
  */
 export function readDecimal(input: unknown): ReadResult {
   if (input === undefined || input === null) return { ok: false, problem: "missing" };
+  const cacheable = typeof input === "number" || (typeof input === "string" && input.length <= MAX_TEXT_LENGTH);
+  if (cacheable) {
+    const known = cache.get(input);
+    if (known !== undefined) return known;
+  }
+  const result = Object.freeze(readUncached(input));
+  if (cacheable) {
+    if (cache.size >= CACHE_LIMIT) cache.clear();
+    cache.set(input, result);
+  }
+  return result;
+}
+
+/**
+ * Recently read inputs. Reading is a pure function and Decimals are never mutated, so sharing
+ * results changes nothing but speed: a slider re-reads the same ingredient figures many times
+ * a second. Bounded: cleared when full.
+ */
+const cache = new Map<unknown, ReadResult>();
+const CACHE_LIMIT = 4096;
+
+function readUncached(input: unknown): ReadResult {
   let value: Decimal;
   if (typeof input === "number") {
     if (!Number.isFinite(input)) return { ok: false, problem: "not-a-number" };

@@ -22,8 +22,14 @@ export interface BaseValues {
   readonly figures: BaseFigures;
 }
 
-/** a / b rounded to the output precision, or 0 when b ≤ 0. */
+const HUNDREDTH = new Dec("0.01");
+
+/**
+ * a / b rounded to the output precision, or 0 when b ≤ 0. Dividing by exactly 100 (the usual
+ * total) is a decimal shift, done as an exact multiplication, which is much faster.
+ */
 function ratio(a: Decimal, b: Decimal): Decimal {
+  if (b.eq(HUNDRED)) return a.times(HUNDREDTH);
   return b.gt(ZERO) ? displayQuotient(a, b) : ZERO;
 }
 

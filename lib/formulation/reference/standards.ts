@@ -227,3 +227,19 @@ export const STANDARD_CATEGORIES: readonly StandardCategory[] = [
  * Directive 2000/36/EC Annex I notes; Codex CXS 87-1981 section 2.
  */
 export const MAX_INCLUSIONS_PERCENT = "40";
+
+/** One limit with its category, flattened for listing (for example on a "sources" page). */
+export interface StandardLimitRow extends StandardLimit {
+  readonly authority: Authority;
+  readonly category: string;
+  /** The basis the limit is computed on. */
+  readonly basis: Basis;
+}
+
+/**
+ * Every limit of STANDARD_CATEGORIES as one flat list, in the same order: authority, category,
+ * quantity, minimum or maximum (exclusive when marked), clause, status and basis.
+ */
+export const STANDARD_LIMITS: readonly StandardLimitRow[] = STANDARD_CATEGORIES.flatMap((category) =>
+  category.limits.map((limit) => ({ ...limit, authority: category.authority, category: category.category, basis: limit.basis ?? category.basis })),
+);
