@@ -1,6 +1,7 @@
 /**
  * Barwright's formulation engine: pure, deterministic functions over recipes. No I/O, no clock,
- * no randomness; imports only decimal.js and its own files.
+ * no randomness; imports only decimal.js and its own files. Figures leave as decimal strings
+ * (see toDecimalString and README.md in this folder); pass/fail is exact.
  */
 export * from "./types";
 export * from "./quantities";
