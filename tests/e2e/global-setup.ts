@@ -1,5 +1,8 @@
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
-import { clusterEnv, clusterUrl, dbScript, migrateCluster } from "../support/clusters";
+import { rmSync } from "node:fs";
+import path from "node:path";
+import { startMailSink } from "../../scripts/mail-sink";
+import { clusterEnv, clusterUrl, dbScript, mailSinks, migrateCluster } from "../support/clusters";
 import { E2E_BASE_URL, E2E_PORT } from "./config";
 
 /**
@@ -11,7 +14,16 @@ export default async function setup() {
   dbScript("e2e", "start");
   migrateCluster("e2e");
   execFileSync("npx", ["tsx", "scripts/seed.ts"], { env: clusterEnv("e2e"), stdio: "inherit" });
-  const env = { ...clusterEnv("e2e"), DATABASE_URL: clusterUrl("e2e"), NEXT_TELEMETRY_DISABLED: "1" };
+  rmSync(mailSinks.e2e.dir, { recursive: true, force: true });
+  const sink = await startMailSink(mailSinks.e2e);
+  const env = {
+    ...clusterEnv("e2e"),
+    DATABASE_URL: clusterUrl("e2e"),
+    NEXT_TELEMETRY_DISABLED: "1",
+    BARWRIGHT_SMTP_URL: `smtp://127.0.0.1:${mailSinks.e2e.port}`,
+    BARWRIGHT_MAILBOX_DIR: path.resolve(mailSinks.e2e.dir),
+    BARWRIGHT_DEMO_MAILBOX: "1",
+  };
   if (process.env.BARWRIGHT_E2E_SKIP_BUILD !== "1") {
     console.log("e2e: building the production app…");
     try {
@@ -30,7 +42,7 @@ export default async function setup() {
   console.log(`e2e: app on ${E2E_BASE_URL}`);
   return async () => {
     server.kill("SIGTERM");
-    await new Promise((r) => setTimeout(r, 300));
+    await new Promise<void>((resolve) => sink.close(() => resolve()));
     dbScript("e2e", "destroy");
   };
 }

@@ -46,7 +46,7 @@ describe("the signed-in shell", () => {
     const signIn = new SignInPage(page);
     await signIn.open();
     await signIn.signIn("not-an-email", "x");
-    await expect(page.getByText("Enter the e-mail address you signed up with.").textContent()).resolves.toBeTruthy();
+    await expect(page.getByText("Enter a valid e-mail address, like name@example.com.").textContent()).resolves.toBeTruthy();
   });
 
   it("signs the owner in to the demo workspace, lists its people, and signs out", async () => {
