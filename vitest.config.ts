@@ -1,6 +1,7 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 import { fileURLToPath } from "node:url";
+import { slotDir, slotPort } from "./tests/support/slot";
 
 const root = fileURLToPath(new URL(".", import.meta.url));
 
@@ -36,13 +37,13 @@ export default defineConfig({
           globalSetup: ["tests/integration/global-setup.ts"],
           setupFiles: ["tests/integration/setup.ts"],
           env: {
-            DATABASE_URL: "postgres://postgres@127.0.0.1:54339/barwright_test",
-            BARWRIGHT_PG_PORT: "54339",
-            BARWRIGHT_PG_DIR: ".data/pg-integration",
+            DATABASE_URL: `postgres://postgres@127.0.0.1:${slotPort(54339)}/barwright_test`,
+            BARWRIGHT_PG_PORT: String(slotPort(54339)),
+            BARWRIGHT_PG_DIR: slotDir(".data/pg-integration"),
             BARWRIGHT_PG_DB: "barwright_test",
             BARWRIGHT_PG_FAST: "1",
-            BARWRIGHT_SMTP_URL: "smtp://127.0.0.1:2535",
-            BARWRIGHT_MAILBOX_DIR: ".data/mailbox-integration",
+            BARWRIGHT_SMTP_URL: `smtp://127.0.0.1:${slotPort(2535)}`,
+            BARWRIGHT_MAILBOX_DIR: slotDir(".data/mailbox-integration"),
             BARWRIGHT_DEMO_MAILBOX: "1",
           },
           fileParallelism: false,

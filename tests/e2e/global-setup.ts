@@ -3,7 +3,7 @@ import { rmSync } from "node:fs";
 import path from "node:path";
 import { startMailSink } from "../../scripts/mail-sink";
 import { clusterEnv, clusterUrl, dbScript, mailSinks, migrateCluster } from "../support/clusters";
-import { E2E_BASE_URL, E2E_PORT } from "./config";
+import { E2E_BASE_URL, E2E_DIST_DIR, E2E_PORT } from "./config";
 
 /**
  * A throw-away cluster with the demo seed, the production build, and `next start`
@@ -23,6 +23,7 @@ export default async function setup() {
     BARWRIGHT_SMTP_URL: `smtp://127.0.0.1:${mailSinks.e2e.port}`,
     BARWRIGHT_MAILBOX_DIR: path.resolve(mailSinks.e2e.dir),
     BARWRIGHT_DEMO_MAILBOX: "1",
+    BARWRIGHT_DIST_DIR: E2E_DIST_DIR,
   };
   if (process.env.BARWRIGHT_E2E_SKIP_BUILD !== "1") {
     console.log("e2e: building the production app…");

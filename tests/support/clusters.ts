@@ -1,12 +1,13 @@
 import { execFileSync } from "node:child_process";
+import { slotDir, slotPort } from "./slot";
 
 /**
  * Throw-away PostgreSQL clusters for the test run: each kind of test has its own
  * port and data folder, created by its global setup and removed afterwards.
  */
 export const clusters = {
-  integration: { port: 54339, dir: ".data/pg-integration", db: "barwright_test" },
-  e2e: { port: 54349, dir: ".data/pg-e2e", db: "barwright_e2e" },
+  integration: { port: slotPort(54339), dir: slotDir(".data/pg-integration"), db: "barwright_test" },
+  e2e: { port: slotPort(54349), dir: slotDir(".data/pg-e2e"), db: "barwright_e2e" },
 } as const;
 
 export type ClusterName = keyof typeof clusters;
@@ -40,6 +41,6 @@ export function migrateCluster(name: ClusterName): void {
 
 /** Local SMTP sinks for the test run (one per kind of test). */
 export const mailSinks = {
-  integration: { port: 2535, dir: ".data/mailbox-integration" },
-  e2e: { port: 2545, dir: ".data/mailbox-e2e" },
+  integration: { port: slotPort(2535), dir: slotDir(".data/mailbox-integration") },
+  e2e: { port: slotPort(2545), dir: slotDir(".data/mailbox-e2e") },
 } as const;
