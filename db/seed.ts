@@ -6,6 +6,7 @@
 import { and, eq } from "drizzle-orm";
 import type { NodePgDatabase } from "drizzle-orm/node-postgres";
 import { hashPassword } from "../lib/auth/password";
+import type { DemoSeeder } from "./demo/context";
 import * as schema from "./schema";
 import { memberships, users, workspaces, type Role } from "./schema";
 
@@ -22,6 +23,12 @@ export const DEMO_PEOPLE: ReadonlyArray<{ name: string; email: string; role: Rol
 
 type Database = NodePgDatabase<typeof schema>;
 
+/**
+ * Each feature's demo data, in dependency order (ingredients before recipes…).
+ * Every seeder is idempotent.
+ */
+const featureSeeders: DemoSeeder[] = [];
+
 export async function seedDemo(db: Database): Promise<{ workspaceId: string }> {
   return db.transaction(async (tx) => {
     await tx.insert(workspaces).values(DEMO_WORKSPACE).onConflictDoNothing({ target: workspaces.slug });
@@ -30,6 +37,7 @@ export async function seedDemo(db: Database): Promise<{ workspaceId: string }> {
 
     // One hash per run (argon2 is deliberately slow); people already present keep theirs.
     const passwordHash = await hashPassword(DEMO_PASSWORD);
+    const people = {} as Record<Role, string>;
     for (const person of DEMO_PEOPLE) {
       await tx
         .insert(users)
@@ -44,7 +52,9 @@ export async function seedDemo(db: Database): Promise<{ workspaceId: string }> {
       if (existing.length === 0) {
         await tx.insert(memberships).values({ workspaceId: workspace.id, userId: user.id, role: person.role });
       }
+      people[person.role] = user.id;
     }
+    for (const seed of featureSeeders) await seed({ tx, workspaceId: workspace.id, people });
     return { workspaceId: workspace.id };
   });
 }

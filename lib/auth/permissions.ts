@@ -1,5 +1,7 @@
 import type { Role } from "@/db/schema";
 
+const everyone = ["owner", "formulator", "buyer", "production", "viewer"] as const;
+
 /**
  * Who may do what, as data. Deny by default: an action not listed here, or a
  * role not listed for it, is refused. Every server action and route handler
@@ -8,11 +10,32 @@ import type { Role } from "@/db/schema";
  */
 export const permissionTable = {
   /** See the workspace, its people, the overview. */
-  "workspace.read": ["owner", "formulator", "buyer", "production", "viewer"],
+  "workspace.read": everyone,
   /** Change one's own password. */
-  "account.manage": ["owner", "formulator", "buyer", "production", "viewer"],
+  "account.manage": everyone,
   /** Invite, revoke invitations, change roles, remove members, read the demo mailbox. */
   "members.manage": ["owner"],
+
+  /** Read the ingredient library, suppliers, quotes and rates. */
+  "ingredients.read": everyone,
+  /** Create, edit and archive ingredients and their files. */
+  "ingredients.edit": ["owner", "formulator"],
+  /** Create, edit and archive suppliers, enter quotes and exchange rates, upload price lists. */
+  "suppliers.edit": ["owner", "buyer"],
+
+  /** Read every version of every recipe, with composition and cost. */
+  "recipes.read": ["owner", "formulator", "buyer", "viewer"],
+  /** Read released versions only (what production works from). */
+  "recipes.readReleased": everyone,
+  /** Create recipes, save versions, restore, fork and release. */
+  "recipes.edit": ["owner", "formulator"],
+
+  /** Read bean lots and their yield chains. */
+  "lots.read": everyone,
+  /** Create bean lots and their prices. */
+  "lots.edit": ["owner", "buyer"],
+  /** Record sorting, roasting, cracking and winnowing. */
+  "lots.process": ["owner", "production"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionTable;
