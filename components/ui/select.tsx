@@ -28,8 +28,10 @@ export function Select({
 }) {
   return (
     <SelectPrimitive.Root name={name} value={value} defaultValue={defaultValue} onValueChange={onValueChange}>
-      <SelectPrimitive.Trigger id={id} aria-label={ariaLabel} className={cn(fieldClass, "flex items-center justify-between")}>
-        <SelectPrimitive.Value placeholder={placeholder} />
+      <SelectPrimitive.Trigger id={id} aria-label={ariaLabel} className={cn(fieldClass, "flex items-center justify-between gap-2 text-left text-sm")}>
+        <span className="truncate">
+          <SelectPrimitive.Value placeholder={placeholder} />
+        </span>
         <SelectPrimitive.Icon className="text-cocoa-500" aria-hidden>
           ▾
         </SelectPrimitive.Icon>
