@@ -5,3 +5,5 @@ export * from "./invitations";
 export * from "./suppliers";
 export * from "./ingredients";
 export * from "./prices";
+export * from "./attachments";
+export * from "./price-list-imports";
