@@ -7,3 +7,4 @@ export * from "./ingredients";
 export * from "./prices";
 export * from "./attachments";
 export * from "./price-list-imports";
+export * from "./recipes";
