@@ -1,9 +1,16 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 import { fileURLToPath } from "node:url";
-import { slotDir, slotPort } from "./tests/support/slot";
 
 const root = fileURLToPath(new URL(".", import.meta.url));
+
+// The same slot arithmetic as tests/support/slot.ts (kept inline: the config is loaded before TypeScript paths).
+const slotNumber = (() => {
+  const n = Number(process.env.BARWRIGHT_TEST_SLOT ?? 0);
+  return Number.isInteger(n) && n >= 0 && n <= 9 ? n : 0;
+})();
+const slotPort = (base: number) => base + 100 * slotNumber;
+const slotDir = (base: string) => (slotNumber === 0 ? base : `${base}-slot${slotNumber}`);
 
 /**
  * Three projects, one per kind of test. `npm test` runs them in order through

@@ -8,3 +8,4 @@ export * from "./prices";
 export * from "./attachments";
 export * from "./price-list-imports";
 export * from "./recipes";
+export * from "./lots";

@@ -1,4 +1,4 @@
-import { char, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { char, numeric, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 
 /** A chocolate business's space: every business row belongs to exactly one. */
 export const workspaces = pgTable("workspaces", {
@@ -6,6 +6,11 @@ export const workspaces = pgTable("workspaces", {
   name: text("name").notNull(),
   slug: text("slug").notNull().unique(),
   baseCurrency: char("base_currency", { length: 3 }).notNull().default("EUR"),
+  /**
+   * Nib yield from raw beans assumed for a lot whose processing is not recorded
+   * yet: 78 %, inside the 75–82 % range of common practice (no single source).
+   */
+  estimatedNibYieldPercent: numeric("estimated_nib_yield_percent", { precision: 6, scale: 3 }).notNull().default("78"),
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
 });
 

@@ -25,3 +25,5 @@ export * from "./money";
 export * from "./check-standards";
 export * from "./reference/ingredients";
 export { dairyComposition, cocoaComposition, type NutrientsPer100g } from "./reference/derive";
+export * from "./yield-chain";
+export * from "./reference/process-ranges";
