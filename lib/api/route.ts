@@ -2,6 +2,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import type { z } from "zod";
 import { fieldErrorsOf } from "@/lib/actions/define-action";
+import { formToObject } from "@/lib/actions/result";
 import { authorize } from "@/lib/auth/authorize";
 import type { Viewer } from "@/lib/auth/current";
 import type { Permission } from "@/lib/auth/permissions";
@@ -19,10 +20,16 @@ export function jsonError(status: number, code: string, message: string, fieldEr
  * data (CSRF), session and permission (401/403), input parsed with zod from the
  * query (GET) or the JSON body (422 on bad input, 400 on malformed JSON), then
  * the handler. AppErrors map to their status; a lost database to 503.
+ * `body: "form"` reads a multipart/form-data body instead (file uploads: File
+ * values reach the schema as they are). A handler that returns a Response (a
+ * file or CSV download) has it sent unchanged. `maxBodyBytes` refuses a larger
+ * body (413) from its Content-Length before reading it.
  */
 export function apiRoute<S extends z.ZodType>(opts: {
   permission: Permission;
   schema: S;
+  body?: "json" | "form";
+  maxBodyBytes?: number;
   handler: (ctx: { input: z.infer<S>; viewer: Viewer; params: Record<string, string | string[] | undefined>; request: Request }) => Promise<unknown>;
 }) {
   return async (request: Request, context: RouteContext): Promise<Response> => {
@@ -33,7 +40,18 @@ export function apiRoute<S extends z.ZodType>(opts: {
     try {
       const viewer = await authorize(opts.permission);
       let raw: unknown;
-      if (mutates) {
+      const length = Number(request.headers.get("content-length") ?? 0);
+      if (mutates && opts.maxBodyBytes && length > opts.maxBodyBytes) {
+        const mb = (opts.maxBodyBytes / (1024 * 1024)).toFixed(0);
+        return jsonError(413, "too_large", `That upload is larger than ${mb} MB. Nothing was saved.`);
+      }
+      if (mutates && opts.body === "form") {
+        try {
+          raw = formToObject(await request.formData());
+        } catch {
+          return jsonError(400, "malformed", "The request body is not a valid form upload.");
+        }
+      } else if (mutates) {
         try {
           raw = await request.json();
         } catch {
@@ -46,6 +64,7 @@ export function apiRoute<S extends z.ZodType>(opts: {
       if (!parsed.success) return jsonError(422, "invalid", "The request has invalid fields.", fieldErrorsOf(parsed.error));
       const params = (await context.params) ?? {};
       const data = await opts.handler({ input: parsed.data, viewer, params, request });
+      if (data instanceof Response) return data;
       return NextResponse.json(data, { headers: { "cache-control": "no-store" } });
     } catch (err) {
       if (err instanceof AppError) return jsonError(httpStatus[err.code], err.code, err.message, err.fieldErrors);
