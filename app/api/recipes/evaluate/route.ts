@@ -1,0 +1,14 @@
+import { apiRoute } from "@/lib/api/route";
+import { evaluateRequest } from "@/lib/data/recipes-evaluate";
+import { evaluateRequestSchema } from "@/lib/validation/recipes";
+
+/**
+ * POST /api/recipes/evaluate — the engine's evaluation of any recipe: lines name
+ * a library ingredient (today's profile and price) or carry their own profile.
+ * With barMassGrams, also the ingredient cost per kg and per bar.
+ */
+export const POST = apiRoute({
+  permission: "recipes.read",
+  schema: evaluateRequestSchema,
+  handler: async ({ input, viewer }) => evaluateRequest({ workspaceId: viewer.workspace.id, request: input }),
+});

@@ -1,0 +1,30 @@
+import "server-only";
+import { costRecipe, evaluateRecipe, type CostResult, type Evaluation, type IngredientSpec, type RecipeLine } from "@/lib/formulation";
+import { toIngredientSpec } from "@/lib/recipes/engine-lines";
+import type { EvaluateRequest } from "@/lib/validation/recipes";
+import { loadBenchIngredients } from "./recipes-ingredients";
+
+/**
+ * The engine's output for a recipe sent to the API. Library ingredients are read
+ * with today's profile and price; inline ones are taken as sent (already
+ * validated). Percents need not sum to 100: the engine reads them as parts and
+ * warns.
+ */
+export async function evaluateRequest({
+  workspaceId,
+  request,
+  on = new Date(),
+}: {
+  workspaceId: string;
+  request: EvaluateRequest;
+  on?: Date;
+}): Promise<{ evaluation: Evaluation; cost?: CostResult }> {
+  const ids = request.lines.flatMap((l) => ("ingredientId" in l ? [l.ingredientId] : []));
+  const library = await loadBenchIngredients({ workspaceId, ingredientIds: ids, on });
+  const lines: RecipeLine[] = request.lines.map((l) => {
+    const ingredient: IngredientSpec = "ingredientId" in l ? toIngredientSpec(library.get(l.ingredientId)!) : l.ingredient;
+    return { ingredient, percent: l.percent };
+  });
+  const evaluation = evaluateRecipe({ lines }, request.authorities ? { authorities: request.authorities } : undefined);
+  return request.barMassGrams ? { evaluation, cost: costRecipe(lines, { barMassGrams: request.barMassGrams }) } : { evaluation };
+}

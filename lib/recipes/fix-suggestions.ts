@@ -1,0 +1,94 @@
+import Decimal from "decimal.js";
+import { evaluateRecipe, solveForTarget, type RecipeLine, type StandardCheck, type StandardResult } from "@/lib/formulation";
+
+/** A change of two lines (one up, one down by the same amount) that makes a failing category pass. */
+export type FixSuggestion = {
+  adjustIndex: number;
+  balanceIndex: number;
+  from: string;
+  to: string;
+  balanceFrom: string;
+  balanceTo: string;
+  /** Every line's percent after the change. */
+  percents: string[];
+  /** False when the change fixes the failing figure but another check of the category still fails. */
+  categoryPasses: boolean;
+};
+
+export type FixOutcome = { ok: true; fix: FixSuggestion } | { ok: false; reason: string };
+
+// Only the few smallest changes are re-checked in full: each check is a full evaluation.
+const VERIFIED_CANDIDATES = 6;
+
+type Candidate = { adjustIndex: number; balanceIndex: number; percents: string[]; size: Decimal };
+
+function targetOf(check: StandardCheck, resolution: string) {
+  if (check.minimum !== undefined) return { value: check.minimum, direction: "atLeast" as const };
+  // A strict maximum ("less than 12 %") is not met at the maximum itself: aim just below it.
+  const max = new Decimal(check.maximum ?? "0");
+  const value = check.exclusiveMaximum ? max.minus(new Decimal(resolution).div(100)).toFixed() : max.toFixed();
+  return { value, direction: "atMost" as const };
+}
+
+function candidatesFor(lines: RecipeLine[], check: StandardCheck, locked: readonly boolean[], resolution: string): Candidate[] {
+  const { value, direction } = targetOf(check, resolution);
+  const out: Candidate[] = [];
+  for (let a = 0; a < lines.length; a++) {
+    for (let b = 0; b < lines.length; b++) {
+      if (a === b || locked[a] || locked[b]) continue;
+      const solved = solveForTarget(lines, { quantity: check.quantity, value, basis: check.basis }, a, b, { resolution, direction });
+      if (!solved.ok) continue;
+      const to = new Decimal(solved.lines[a]!.percent);
+      const size = to.minus(new Decimal(String(lines[a]!.percent))).abs();
+      if (size.isZero()) continue;
+      out.push({ adjustIndex: a, balanceIndex: b, percents: solved.lines.map((l) => l.percent), size });
+    }
+  }
+  return out.sort((x, y) => x.size.cmp(y.size));
+}
+
+function categoryAfter(lines: RecipeLine[], percents: string[], result: StandardResult): StandardResult | undefined {
+  const moved = lines.map((line, i) => ({ ...line, percent: percents[i]! }));
+  return evaluateRecipe({ lines: moved }, { authorities: [result.authority] }).standards.find((s) => s.category === result.category);
+}
+
+/**
+ * The smallest two-line change (solveForTarget: one line up, one down) that meets
+ * each failing limit of a category, preferring one after which the whole
+ * category passes. Locked lines never move. Pure; cost grows with lines².
+ */
+export function suggestFix(
+  lines: RecipeLine[],
+  result: StandardResult,
+  options: { locked?: readonly boolean[]; resolution?: string } = {},
+): FixOutcome {
+  const locked = options.locked ?? [];
+  const resolution = options.resolution ?? "0.1";
+  const failing = result.checks.filter((c) => !c.pass);
+  if (failing.length === 0) return { ok: false, reason: "This category is already met." };
+  const candidates = failing.flatMap((check) => candidatesFor(lines, check, locked, resolution));
+  if (candidates.length === 0) {
+    return { ok: false, reason: "No change of two unlocked lines meets it: unlock a line or add an ingredient that carries what is missing." };
+  }
+  candidates.sort((x, y) => x.size.cmp(y.size));
+  let fallback: Candidate | undefined;
+  for (const candidate of candidates.slice(0, VERIFIED_CANDIDATES)) {
+    const after = categoryAfter(lines, candidate.percents, result);
+    if (after?.pass) return { ok: true, fix: describe(lines, candidate, true) };
+    fallback ??= candidate;
+  }
+  return { ok: true, fix: describe(lines, fallback ?? candidates[0]!, false) };
+}
+
+function describe(lines: RecipeLine[], c: Candidate, categoryPasses: boolean): FixSuggestion {
+  return {
+    adjustIndex: c.adjustIndex,
+    balanceIndex: c.balanceIndex,
+    from: String(lines[c.adjustIndex]!.percent),
+    to: c.percents[c.adjustIndex]!,
+    balanceFrom: String(lines[c.balanceIndex]!.percent),
+    balanceTo: c.percents[c.balanceIndex]!,
+    percents: c.percents,
+    categoryPasses,
+  };
+}
