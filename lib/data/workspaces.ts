@@ -1,5 +1,6 @@
 import "server-only";
 import { randomBytes } from "node:crypto";
+import { eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, users, workspaces } from "@/db/schema";
 
@@ -35,4 +36,10 @@ export async function createAccountWithWorkspace(input: {
     await tx.insert(memberships).values({ userId: user.id, workspaceId: workspace.id, role: "owner" });
     return { userId: user.id, workspaceId: workspace.id };
   });
+}
+
+/** The workspace's base currency (ISO 4217), in which every cost is shown. */
+export async function getWorkspaceBaseCurrency({ workspaceId }: { workspaceId: string }): Promise<string> {
+  const [row] = await db.select({ base: workspaces.baseCurrency }).from(workspaces).where(eq(workspaces.id, workspaceId));
+  return row?.base ?? "EUR";
 }

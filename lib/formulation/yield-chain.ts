@@ -68,7 +68,7 @@ export function checkChainRecord(r: ChainRecord): ChainNotice[] {
     notices.push({ code: "out-exceeds-in", step: r.step, message: `Mass out (${kg(outKg)} kg) is more than mass in (${kg(inKg)} kg).` });
   }
   const parts = [outKg, read(r.rejectsKg), read(r.shellKg), read(r.dustKg)].reduce<Decimal>((s, p) => (p ? s.plus(p) : s), ZERO);
-  if (parts.gt(inKg)) {
+  if (outKg.lte(inKg) && parts.gt(inKg)) {
     notices.push({
       code: "parts-exceed-in",
       step: r.step,
