@@ -52,6 +52,8 @@ export default defineConfig({
             BARWRIGHT_SMTP_URL: `smtp://127.0.0.1:${slotPort(2535)}`,
             BARWRIGHT_MAILBOX_DIR: slotDir(".data/mailbox-integration"),
             BARWRIGHT_DEMO_MAILBOX: "1",
+            BARWRIGHT_S3_ENDPOINT: `http://127.0.0.1:${slotPort(4535)}`,
+            BARWRIGHT_S3_BUCKET: "barwright-test",
           },
           fileParallelism: false,
           testTimeout: 30_000,

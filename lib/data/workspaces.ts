@@ -3,6 +3,7 @@ import { randomBytes } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, users, workspaces } from "@/db/schema";
+import { addReferenceIngredients } from "./ingredients";
 
 /** A URL-safe slug from a business name, with a random suffix so it is unique. */
 export function slugFor(name: string): string {
@@ -16,7 +17,10 @@ export function slugFor(name: string): string {
   return `${base || "workspace"}-${randomBytes(3).toString("hex")}`;
 }
 
-/** Sign-up: a new user, their new workspace, and their owner membership, in one transaction. */
+/**
+ * Sign-up: a new user, their new workspace (its ingredient library started from
+ * the reference profiles), and their owner membership, in one transaction.
+ */
 export async function createAccountWithWorkspace(input: {
   name: string;
   email: string;
@@ -34,6 +38,7 @@ export async function createAccountWithWorkspace(input: {
       .returning({ id: workspaces.id });
     if (!user || !workspace) throw new Error("insert returned no row");
     await tx.insert(memberships).values({ userId: user.id, workspaceId: workspace.id, role: "owner" });
+    await addReferenceIngredients({ tx, workspaceId: workspace.id });
     return { userId: user.id, workspaceId: workspace.id };
   });
 }

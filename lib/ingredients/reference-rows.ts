@@ -4,8 +4,8 @@
  * demo seed (db/demo) can use it.
  */
 import Decimal from "decimal.js";
-import type { IngredientKind, NewIngredient } from "@/db/schema/ingredients";
-import { DEFAULT_INGREDIENTS, type IngredientProfile } from "@/lib/formulation";
+import type { IngredientKind, NewIngredient } from "../../db/schema/ingredients";
+import { DEFAULT_INGREDIENTS, type IngredientProfile } from "../formulation";
 
 const KIND_BY_KEY: Record<string, IngredientKind> = {
   "cocoa-nibs": "nibs",

@@ -1,8 +1,9 @@
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import { rmSync } from "node:fs";
 import path from "node:path";
+import { startFakeS3 } from "../../scripts/fake-s3";
 import { startMailSink } from "../../scripts/mail-sink";
-import { clusterEnv, clusterUrl, dbScript, mailSinks, migrateCluster } from "../support/clusters";
+import { clusterEnv, clusterUrl, dbScript, fakeS3s, mailSinks, migrateCluster } from "../support/clusters";
 import { E2E_BASE_URL, E2E_DIST_DIR, E2E_PORT } from "./config";
 
 /**
@@ -16,6 +17,8 @@ export default async function setup() {
   execFileSync("npx", ["tsx", "scripts/seed.ts"], { env: clusterEnv("e2e"), stdio: "inherit" });
   rmSync(mailSinks.e2e.dir, { recursive: true, force: true });
   const sink = await startMailSink(mailSinks.e2e);
+  rmSync(fakeS3s.e2e.dir, { recursive: true, force: true });
+  const s3 = await startFakeS3(fakeS3s.e2e);
   const env = {
     ...clusterEnv("e2e"),
     DATABASE_URL: clusterUrl("e2e"),
@@ -24,6 +27,8 @@ export default async function setup() {
     BARWRIGHT_MAILBOX_DIR: path.resolve(mailSinks.e2e.dir),
     BARWRIGHT_DEMO_MAILBOX: "1",
     BARWRIGHT_DIST_DIR: E2E_DIST_DIR,
+    BARWRIGHT_S3_ENDPOINT: `http://127.0.0.1:${fakeS3s.e2e.port}`,
+    BARWRIGHT_S3_BUCKET: fakeS3s.e2e.bucket,
   };
   if (process.env.BARWRIGHT_E2E_SKIP_BUILD !== "1") {
     console.log("e2e: building the production app…");
@@ -44,6 +49,8 @@ export default async function setup() {
   return async () => {
     server.kill("SIGTERM");
     await new Promise<void>((resolve) => sink.close(() => resolve()));
+    await s3.close();
+    rmSync(fakeS3s.e2e.dir, { recursive: true, force: true });
     dbScript("e2e", "destroy");
   };
 }

@@ -44,3 +44,9 @@ export const mailSinks = {
   integration: { port: slotPort(2535), dir: slotDir(".data/mailbox-integration") },
   e2e: { port: slotPort(2545), dir: slotDir(".data/mailbox-e2e") },
 } as const;
+
+/** Local fake S3 servers for the test run (one per kind of test; scripts/fake-s3.ts). */
+export const fakeS3s = {
+  integration: { port: slotPort(4535), dir: slotDir(".data/s3-integration"), bucket: "barwright-test" },
+  e2e: { port: slotPort(4545), dir: slotDir(".data/s3-e2e"), bucket: "barwright-e2e" },
+} as const;
