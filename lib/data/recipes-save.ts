@@ -7,7 +7,7 @@ import { toRecipeLines } from "@/lib/recipes/engine-lines";
 import { toStored, versionFigures } from "@/lib/recipes/figures";
 import { PROFILE_FIELDS, type BenchIngredient } from "@/lib/recipes/types";
 import { inTransaction, type Executor } from "./recipes-db";
-import { lockRecipe } from "./recipes";
+import { getRecipe, lockRecipe } from "./recipes";
 import { loadBenchIngredients } from "./recipes-ingredients";
 import { isUniqueViolation } from "./pg-errors";
 
@@ -58,6 +58,8 @@ function snapshotLine(versionId: string, position: number, ingredient: BenchIngr
  */
 export async function saveRecipeVersion(args: SaveVersionArgs): Promise<{ versionNo: number }> {
   const { workspaceId, recipeId, baseVersionNo } = args;
+  // Another workspace's recipe is "not found" before its ingredients are "unknown".
+  await getRecipe({ workspaceId, recipeId, executor: args.executor });
   const byId = await loadBenchIngredients({ workspaceId, ingredientIds: args.lines.map((l) => l.ingredientId), on: args.on ?? new Date(), executor: args.executor });
   const resolved = args.lines.map((l) => ({ ingredient: byId.get(l.ingredientId)!, percent: l.percent }));
   const engineLines = toRecipeLines(resolved.map((r) => ({ profile: r.ingredient, percent: r.percent })));
