@@ -1,0 +1,31 @@
+import type { Page } from "playwright-core";
+import { E2E_BASE_URL } from "../config";
+
+/** A bean lot's page: the chain, the nib cost and the record forms. */
+export class LotPage {
+  constructor(private readonly page: Page) {}
+
+  async openByCode(code: string) {
+    await this.page.goto(`${E2E_BASE_URL}/lots`);
+    await this.page.getByRole("link", { name: code, exact: true }).click();
+    await this.page.waitForURL(/\/lots\/[0-9a-f-]{36}$/);
+  }
+
+  /** Records a step through the form; `fields` maps a field label to its value. */
+  async recordStep(step: "Sorting" | "Roasting" | "Cracking and winnowing", fields: Record<string, string>) {
+    const form = this.page.getByRole("form", { name: "Record a processing step" });
+    await form.getByRole("combobox", { name: "Step" }).click();
+    await this.page.getByRole("option", { name: step, exact: true }).click();
+    for (const [label, value] of Object.entries(fields)) await form.getByLabel(label, { exact: true }).fill(value);
+    await form.getByRole("button", { name: "Record step" }).click();
+    await form.getByTestId("form-success").waitFor();
+  }
+
+  nibCost() {
+    return this.page.getByTestId("nib-cost").textContent();
+  }
+
+  cumulativeYield() {
+    return this.page.getByTestId("cumulative-yield").textContent();
+  }
+}
