@@ -53,7 +53,9 @@ export function apiRoute<S extends z.ZodType>(opts: {
         }
       } else if (mutates) {
         try {
-          raw = await request.json();
+          // A bodiless DELETE (or POST) means "no fields".
+          const text = await request.text();
+          raw = text.trim() === "" ? {} : JSON.parse(text);
         } catch {
           return jsonError(400, "malformed", "The request body is not valid JSON.");
         }

@@ -5,6 +5,7 @@ import { exchangeRates, workspaces } from "@/db/schema";
 import { conflict, invalid, notFound } from "@/lib/errors";
 import type { DatedRate } from "@/lib/pricing/convert";
 import type { ExchangeRateInput } from "@/lib/validation/currencies";
+import { plain } from "./numeric";
 
 export type ExchangeRateRecord = DatedRate & { id: string };
 
@@ -17,11 +18,12 @@ export async function getBaseCurrency({ workspaceId }: { workspaceId: string }):
 
 /** Every rate the buyer has entered, by currency then newest first. */
 export async function listExchangeRates({ workspaceId }: { workspaceId: string }): Promise<ExchangeRateRecord[]> {
-  return db
+  const rows = await db
     .select({ id: exchangeRates.id, currency: exchangeRates.currency, rateToBase: exchangeRates.rateToBase, validOn: exchangeRates.validOn })
     .from(exchangeRates)
     .where(eq(exchangeRates.workspaceId, workspaceId))
     .orderBy(asc(exchangeRates.currency), desc(exchangeRates.validOn));
+  return rows.map((r) => ({ ...r, rateToBase: plain(r.rateToBase) }));
 }
 
 /**

@@ -7,8 +7,9 @@ import { conflict, invalid, notFound } from "@/lib/errors";
 import { referenceIngredientRows } from "@/lib/ingredients/reference-rows";
 import type { IngredientInput } from "@/lib/validation/ingredients";
 import { findRecipesUsingIngredient } from "./ingredient-usage";
+import { plain } from "./numeric";
 import { isUniqueViolation } from "./pg-errors";
-import { plural } from "./suppliers";
+import { listing, plural } from "./suppliers";
 
 export type IngredientRecord = {
   id: string;
@@ -44,7 +45,16 @@ const { workspaceId: _w, createdAt: _c, updatedAt: _u, archivedAt: _a, ...ingred
 const selection = { ...ingredientColumns, archivedAt: ingredients.archivedAt, preferredSupplierName: suppliers.name };
 
 type Row = { archivedAt: Date | null } & Omit<IngredientRecord, "archived">;
-const toRecord = ({ archivedAt, ...r }: Row): IngredientRecord => ({ ...r, archived: archivedAt !== null });
+const FIGURES = [
+  "cocoaButter", "cocoaSolidsNonFat", "milkFat", "milkSolidsNonFat", "sugar", "vegetableFat", "moisture",
+  "fat", "saturatedFat", "carbohydrate", "sugars", "fibre", "protein", "salt", "ash",
+] as const;
+
+const toRecord = ({ archivedAt, ...r }: Row): IngredientRecord => {
+  const out = { ...r, archived: archivedAt !== null };
+  for (const k of FIGURES) (out as unknown as Record<string, string | null>)[k] = plain(r[k]);
+  return out;
+};
 
 /** The workspace's ingredient library by name (archived ones only when asked). */
 export async function listIngredients({
@@ -150,7 +160,7 @@ export async function setPreferredSupplier({
       .select({ archivedAt: suppliers.archivedAt })
       .from(suppliers)
       .where(and(eq(suppliers.workspaceId, workspaceId), eq(suppliers.id, supplierId)));
-    if (!supplier) throw invalid("Choose one of your suppliers.", { supplierId: ["Choose one of your suppliers."] });
+    if (!supplier) throw notFound("That supplier");
     if (supplier.archivedAt) throw invalid("That supplier is archived; restore it first.", { supplierId: ["That supplier is archived."] });
   }
   const done = await db
@@ -177,14 +187,14 @@ export async function deleteIngredient({ workspaceId, ingredientId }: { workspac
     const recipes = await findRecipesUsingIngredient({ tx, workspaceId, ingredientId });
     if (recipes.length > 0) {
       throw conflict(
-        `${ingredient.name} is used by ${recipes.length === 1 ? "the recipe" : "the recipes"} ${recipes.join(", ")} and cannot be deleted. Archive it instead.`,
+        `${ingredient.name} is used by ${recipes.length === 1 ? "the recipe" : "the recipes"} ${listing(recipes)} and cannot be deleted. Archive it instead.`,
       );
     }
     const [quotes] = await tx.select({ n: count() }).from(priceQuotes).where(eq(priceQuotes.ingredientId, ingredientId));
     const [files] = await tx.select({ n: count() }).from(attachments).where(eq(attachments.ingredientId, ingredientId));
     const uses = [plural(quotes?.n ?? 0, "price quote"), plural(files?.n ?? 0, "file")].filter((u): u is string => u !== null);
     if (uses.length > 0) {
-      throw conflict(`${ingredient.name} cannot be deleted: ${uses.join(" and ")} still refer to it. Archive it instead; its history stays.`);
+      throw conflict(`${ingredient.name} cannot be deleted: ${listing(uses)} still refer to it. Archive it instead; its history stays.`);
     }
     await tx.delete(ingredients).where(and(eq(ingredients.workspaceId, workspaceId), eq(ingredients.id, ingredientId)));
   });

@@ -4,6 +4,7 @@ import { db } from "@/db/client";
 import { ingredients, priceQuotes, suppliers, type PriceUnit } from "@/db/schema";
 import { currentQuote, quotePerKgInBase } from "@/lib/pricing/convert";
 import { getBaseCurrency, listExchangeRates } from "./exchange-rates";
+import { plain } from "./numeric";
 
 /** An ingredient's price from its preferred supplier on a day, in the base currency. */
 export type CurrentPrice =
@@ -115,14 +116,14 @@ export async function getCurrentPrices({
       supplierName: ingredient.supplierName,
       quoteId: quote.id,
       quoted: {
-        price: quote.price,
+        price: plain(quote.price),
         currency: quote.currency,
         unit: quote.unit,
-        packKg: quote.packKg,
+        packKg: plain(quote.packKg),
         validFrom: quote.validFrom,
         validUntil: quote.validUntil,
       },
-      rate: { rateToBase: converted.value.rate.rateToBase, validOn: converted.value.rate.validOn },
+      rate: { rateToBase: plain(converted.value.rate.rateToBase), validOn: converted.value.rate.validOn },
     };
   }
   return result;

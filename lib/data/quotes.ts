@@ -3,11 +3,12 @@ import { and, asc, desc, eq, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db/client";
 import { ingredients, priceQuotes, suppliers, users, type PriceUnit } from "@/db/schema";
-import { conflict, invalid } from "@/lib/errors";
+import { conflict, invalid, notFound } from "@/lib/errors";
 import { currentQuote, quotePerKgInBase, type DatedRate } from "@/lib/pricing/convert";
 import { quoteDedupeKey } from "@/lib/pricing/dedupe-key";
 import type { QuoteInput } from "@/lib/validation/quotes";
 import { getBaseCurrency, listExchangeRates } from "./exchange-rates";
+import { plain } from "./numeric";
 import { isUniqueViolation } from "./pg-errors";
 
 export type QuoteRecord = {
@@ -85,7 +86,8 @@ export async function listQuotes({
     listExchangeRates({ workspaceId }),
   ]);
   const currentIds = currentIdsByPair(rows, on);
-  const quotes = rows.map((r) => {
+  const quotes = rows.map((raw) => {
+    const r = { ...raw, price: plain(raw.price), packKg: plain(raw.packKg), minimumOrderKg: plain(raw.minimumOrderKg) };
     const converted = quotePerKgInBase(r, { base: baseCurrency, rates, on: r.validFrom });
     return {
       ...r,
@@ -123,13 +125,13 @@ async function checkPair(workspaceId: string, supplierId: string, ingredientId: 
     .select({ archivedAt: suppliers.archivedAt, name: suppliers.name })
     .from(suppliers)
     .where(and(eq(suppliers.workspaceId, workspaceId), eq(suppliers.id, supplierId)));
-  if (!supplier) throw invalid("Choose one of your suppliers.", { supplierId: ["Choose one of your suppliers."] });
+  if (!supplier) throw notFound("That supplier");
   if (supplier.archivedAt) throw invalid(`${supplier.name} is archived; restore it first.`, { supplierId: ["That supplier is archived."] });
   const [ingredient] = await db
     .select({ archivedAt: ingredients.archivedAt, name: ingredients.name })
     .from(ingredients)
     .where(and(eq(ingredients.workspaceId, workspaceId), eq(ingredients.id, ingredientId)));
-  if (!ingredient) throw invalid("Choose one of your ingredients.", { ingredientId: ["Choose one of your ingredients."] });
+  if (!ingredient) throw notFound("That ingredient");
   if (ingredient.archivedAt) {
     throw invalid(`${ingredient.name} is archived; restore it first.`, { ingredientId: ["That ingredient is archived."] });
   }

@@ -145,7 +145,7 @@ export async function deleteSupplier({ workspaceId, supplierId }: { workspaceId:
       preferredBy.length ? `the preferred-supplier choice of ${preferredBy.map((i) => i.name).join(", ")}` : null,
     ].filter((u): u is string => u !== null);
     if (uses.length > 0) {
-      throw conflict(`${supplier.name} cannot be deleted: ${uses.join(", ")} still refer to it. Archive it instead; its history stays.`);
+      throw conflict(`${supplier.name} cannot be deleted: ${listing(uses)} still refer to it. Archive it instead; its history stays.`);
     }
     await tx.delete(suppliers).where(and(eq(suppliers.workspaceId, workspaceId), eq(suppliers.id, supplierId)));
   });
@@ -154,4 +154,9 @@ export async function deleteSupplier({ workspaceId, supplierId }: { workspaceId:
 /** "3 price quotes", "1 file", or null for none. */
 export function plural(n: number, noun: string): string | null {
   return n === 0 ? null : `${n} ${noun}${n === 1 ? "" : "s"}`;
+}
+
+/** "a", "a and b", "a, b and c". */
+export function listing(items: readonly string[]): string {
+  return items.length <= 1 ? (items[0] ?? "") : `${items.slice(0, -1).join(", ")} and ${items[items.length - 1]}`;
 }

@@ -28,8 +28,8 @@ export async function checkUpload(bytes: Uint8Array): Promise<UploadCheck> {
   }
   const type = await fileTypeFromBuffer(bytes);
   if (!type || !(type.mime in ALLOWED_FILE_TYPES)) {
-    const what = type ? `a ${type.ext.toUpperCase()} file` : "not a file type we recognise";
-    return { ok: false, reason: `That file is ${what}. Attach a PDF, PNG or JPEG (checked by its content, not its name).` };
+    const what = type ? `really of type ${type.ext.toUpperCase()}` : "not of a type we recognise";
+    return { ok: false, reason: `That file is ${what}, judged by its content, not its name. Attach a PDF, PNG or JPEG.` };
   }
   const contentType = type.mime as AllowedContentType;
   return { ok: true, contentType, extension: ALLOWED_FILE_TYPES[contentType], sizeBytes: bytes.byteLength };

@@ -38,7 +38,9 @@ export async function decodePriceList(bytes: Uint8Array): Promise<Decoded> {
   if (bytes.includes(0)) return { ok: false, reason: `That file is not text (it contains binary data), so it is not a CSV file.` };
   const asUtf8 = utf8(bytes, "UTF-8");
   if (asUtf8.ok) return asUtf8;
-  const detected = chardet.detect(bytes);
+  const guess = chardet.detect(bytes);
+  // WHATWG Encoding Standard: the label "iso-8859-1" means windows-1252 (its superset, with € and curly quotes).
+  const detected = guess === "ISO-8859-1" ? "windows-1252" : guess;
   if (detected && ACCEPTED.has(detected) && iconv.encodingExists(detected)) {
     return { ok: true, text: iconv.decode(Buffer.from(bytes), detected), encoding: detected };
   }
