@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
+import { headers } from "next/headers";
 import type { ReactNode } from "react";
 import { ToastProvider } from "@/components/ui/toast";
 import "./globals.css";
@@ -18,7 +19,10 @@ export const metadata: Metadata = {
   description: "Formulation, costing, batch sheets and labels for bean-to-bar chocolate makers.",
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Reading the request makes every page render per request, so each gets the
+  // CSP nonce proxy.ts generated (Next.js applies it to its own scripts).
+  await headers();
   return (
     <html lang="en" className={sans.variable}>
       <body>
