@@ -1,7 +1,8 @@
 /**
  * A local SMTP sink for development, the demo and tests: accepts every message
  * on 127.0.0.1 (plain SMTP, optional auth) and stores each as JSON in the
- * mailbox folder, where the owner-only demo mailbox page reads it.
+ * mailbox folder, where the owner-only demo mailbox page reads it. Attachments
+ * are recorded by file name, type and size only (their content is not kept).
  *   BARWRIGHT_SMTP_PORT (default 2525), BARWRIGHT_MAILBOX_DIR (default .data/mailbox)
  */
 import { mkdirSync, writeFileSync } from "node:fs";
@@ -30,6 +31,7 @@ export function startMailSink(opts: { port: number; dir: string }): Promise<SMTP
             to,
             subject: mail.subject ?? "",
             text: mail.text ?? "",
+            attachments: mail.attachments.map((a) => ({ filename: a.filename ?? "", contentType: a.contentType, size: a.size })),
           };
           writeFileSync(path.join(opts.dir, `${id}.json`), JSON.stringify(record, null, 2));
           callback();

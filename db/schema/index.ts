@@ -9,3 +9,5 @@ export * from "./attachments";
 export * from "./price-list-imports";
 export * from "./recipes";
 export * from "./lots";
+export * from "./batches";
+export * from "./purchases";

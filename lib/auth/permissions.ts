@@ -36,6 +36,15 @@ export const permissionTable = {
   "lots.edit": ["owner", "buyer"],
   /** Record sorting, roasting, cracking and winnowing. */
   "lots.process": ["owner", "production"],
+
+  /** Read batches, their sheets' figures, runs and traceability, machines and scales. */
+  "batches.read": everyone,
+  /** Plan batches from released versions, print batch sheets, record runs. */
+  "batches.plan": ["owner", "production"],
+  /** Material requirements into purchase orders: draft, send, receive, cancel. */
+  "purchases.manage": ["owner", "buyer"],
+  /** Add and retire machines and weighing stations. */
+  "machines.manage": ["owner", "production"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionTable;

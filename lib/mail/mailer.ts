@@ -24,6 +24,9 @@ const transport = nodemailer.createTransport({
   socketTimeout: 10_000,
 });
 
-export async function sendMail(message: { to: string; subject: string; text: string; html?: string }): Promise<void> {
+/** A file sent with a message (a purchase order's CSV…). */
+export type MailAttachment = { filename: string; content: string | Buffer; contentType: string };
+
+export async function sendMail(message: { to: string; subject: string; text: string; html?: string; attachments?: MailAttachment[] }): Promise<void> {
   await transport.sendMail({ from, ...message });
 }

@@ -30,6 +30,10 @@ export const expectedRights: Record<Permission, Role[]> = {
   "lots.read": everyone,
   "lots.edit": ["owner", "buyer"],
   "lots.process": ["owner", "production"],
+  "batches.read": everyone,
+  "batches.plan": ["owner", "production"],
+  "purchases.manage": ["owner", "buyer"],
+  "machines.manage": ["owner", "production"],
 };
 
 export type MatrixContext = { team: TeamFixture; other: TeamFixture; caller: Role | "signed-out" | "outsider" };
