@@ -11,3 +11,4 @@ export * from "./recipes";
 export * from "./lots";
 export * from "./batches";
 export * from "./purchases";
+export * from "./labels";
