@@ -8,6 +8,7 @@ import type { NodePgDatabase } from "drizzle-orm/node-postgres";
 import { hashPassword } from "../lib/auth/password";
 import type { DemoSeeder } from "./demo/context";
 import { seedIngredients } from "./demo/ingredients";
+import { seedRecipes } from "./demo/recipes";
 import { seedLots } from "./demo/lots";
 import * as schema from "./schema";
 import { memberships, users, workspaces, type Role } from "./schema";
@@ -29,7 +30,7 @@ type Database = NodePgDatabase<typeof schema>;
  * Each feature's demo data, in dependency order (ingredients before recipes…).
  * Every seeder is idempotent.
  */
-const featureSeeders: DemoSeeder[] = [seedIngredients, seedLots];
+const featureSeeders: DemoSeeder[] = [seedIngredients, seedRecipes, seedLots];
 
 export async function seedDemo(db: Database): Promise<{ workspaceId: string }> {
   return db.transaction(async (tx) => {

@@ -3,6 +3,7 @@ import type { Permission } from "@/lib/auth/permissions";
 /** The signed-in app's sections, in the order a maker's work flows; each shown only to roles that may use it. */
 export const navItems: ReadonlyArray<{ href: string; label: string; permission: Permission; demoOnly?: boolean }> = [
   { href: "/overview", label: "Overview", permission: "workspace.read" },
+  { href: "/recipes", label: "Recipes", permission: "recipes.readReleased" },
   { href: "/lots", label: "Bean lots", permission: "lots.read" },
   { href: "/settings/members", label: "Team", permission: "workspace.read" },
   { href: "/settings/mailbox", label: "Mailbox", permission: "members.manage", demoOnly: true },

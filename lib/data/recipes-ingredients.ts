@@ -1,13 +1,16 @@
 import "server-only";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db/client";
+import type { DemoContext } from "@/db/demo/context";
 import { ingredients } from "@/db/schema";
 import { DEFAULT_INGREDIENTS } from "@/lib/formulation";
 import { invalid } from "@/lib/errors";
 import { referenceIngredientRow } from "@/lib/ingredients/reference-rows";
+import { isoDay } from "@/lib/pricing/convert";
 import type { BenchIngredient } from "@/lib/recipes/types";
 import type { Executor } from "./recipes-db";
 import { currentPricesFor } from "./recipes-prices";
+import { ingredientsInTransaction } from "./recipes-rows";
 
 const columns = {
   id: ingredients.id,
@@ -77,10 +80,16 @@ export async function loadBenchIngredients({
   executor?: Executor;
 }): Promise<Map<string, BenchIngredient>> {
   const ids = [...new Set(ingredientIds)];
-  const rows = ids.length ? await selectIngredients(executor, workspaceId, ids) : [];
-  if (rows.length !== ids.length) throw invalid("One of the ingredients is not in this workspace's library any more.", { lines: ["Unknown ingredient."] });
-  const prices = await currentPricesFor({ workspaceId, ingredientIds: ids, on, executor });
-  return new Map(rows.map((r) => [r.id, toBench(r, prices)]));
+  const found =
+    executor === db
+      ? await (async () => {
+          const rows = ids.length ? await selectIngredients(executor, workspaceId, ids) : [];
+          const prices = await currentPricesFor({ workspaceId, ingredientIds: ids, on });
+          return new Map(rows.map((r) => [r.id, toBench(r, prices)]));
+        })()
+      : await ingredientsInTransaction(executor as DemoContext["tx"], { workspaceId, ingredientIds: ids, on: isoDay(on) });
+  if (found.size !== ids.length) throw invalid("One of the ingredients is not in this workspace's library any more.", { lines: ["Unknown ingredient."] });
+  return found;
 }
 
 /**

@@ -3,7 +3,8 @@ import { and, asc, count, desc, eq, ilike, isNotNull, isNull, sql, type SQL } fr
 import { db } from "@/db/client";
 import type { AnyPgColumn } from "drizzle-orm/pg-core";
 import { recipes, recipeVersions, type ChocolateType } from "@/db/schema";
-import type { RecipeListQuery, RecipeSort } from "@/lib/validation/recipes";
+import { DEFAULT_DIRECTION } from "@/lib/recipes/list-defaults";
+import type { RecipeListQuery } from "@/lib/validation/recipes";
 
 export type RecipeListRow = {
   id: string;
@@ -20,7 +21,6 @@ export type RecipeListRow = {
 
 export type RecipeListPage = { rows: RecipeListRow[]; total: number; page: number; pageSize: number; pageCount: number };
 
-export const DEFAULT_DIRECTION: Record<RecipeSort, "asc" | "desc"> = { name: "asc", updated: "desc", cocoa: "desc", cost: "asc" };
 
 /** `%` and `_` typed by a person are literal characters, not wildcards. */
 const likePattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;

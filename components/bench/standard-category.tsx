@@ -1,0 +1,80 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import { Badge } from "@/components/ui/badge";
+import { Button } from "@/components/ui/button";
+import type { StandardCheck, StandardResult } from "@/lib/formulation";
+import { pct } from "@/lib/recipes/format";
+import type { FixOutcome } from "@/lib/recipes/fix-suggestions";
+
+/** Whatever the bench lends the standards panel to suggest and apply a fix. */
+export type Fixer = {
+  suggest: (result: StandardResult) => FixOutcome;
+  apply: (percents: string[]) => void;
+  lineName: (index: number) => string;
+};
+
+/** "short by 2.3 %", "over by 0.4 %", with two decimals when one would show 0.0. */
+export function gap(check: StandardCheck): string {
+  const amount = check.shortBy ?? check.overBy ?? "0";
+  const decimals = Number(amount) > 0 && Number(amount) < 0.05 ? 2 : 1;
+  if (check.overBy === "0") return "at the maximum, which it must stay below";
+  return `${check.shortBy !== undefined ? "short by" : "over by"} ${pct(amount, decimals)}`;
+}
+
+function FixSuggestionView({ outcome, fixer }: { outcome: FixOutcome; fixer: Fixer }) {
+  if (!outcome.ok) return <p className="text-sm text-cocoa-500">{outcome.reason}</p>;
+  const { fix } = outcome;
+  const up = Number(fix.to) > Number(fix.from);
+  return (
+    <div className="mt-2 rounded-lg bg-cream-deep p-3 text-sm" data-testid="fix-suggestion">
+      <p>
+        {up ? "Raise" : "Lower"} <strong>{fixer.lineName(fix.adjustIndex)}</strong> from <span className="figures">{pct(fix.from)}</span> to{" "}
+        <span className="figures">{pct(fix.to)}</span>, with <strong>{fixer.lineName(fix.balanceIndex)}</strong> from{" "}
+        <span className="figures">{pct(fix.balanceFrom)}</span> to <span className="figures">{pct(fix.balanceTo)}</span>.
+      </p>
+      {fix.categoryPasses ? null : <p className="mt-1 text-cocoa-500">That meets this limit; another limit of the category still fails after it.</p>}
+      <Button size="sm" variant="secondary" className="mt-2" onClick={() => fixer.apply(fix.percents)}>
+        Apply this change
+      </Button>
+    </div>
+  );
+}
+
+/** One category of one authority: meets, or which limits fail by how much, and a way to meet it. */
+export function StandardCategory({ result, fixer, aimed }: { result: StandardResult; fixer?: Fixer; aimed?: boolean }) {
+  const [asked, setAsked] = useState(false);
+  const failing = result.checks.filter((c) => !c.pass);
+  const showFix = fixer !== undefined && failing.length > 0 && (aimed || asked);
+  // Several engine runs: only when shown, and again only when the figures change.
+  const outcome = useMemo(() => (showFix ? fixer.suggest(result) : null), [showFix, fixer, result]);
+  return (
+    <li className="py-2" data-testid={`standard-${result.authority}-${result.category}`}>
+      <div className="flex items-start justify-between gap-3">
+        <div>
+          <p className="font-semibold first-letter:uppercase">{result.category}</p>
+          <p className="text-xs text-cocoa-500">{result.reference}</p>
+        </div>
+        <Badge tone={result.pass ? "meets" : "short"}>{result.pass ? "meets" : "does not meet"}</Badge>
+      </div>
+      {failing.length > 0 ? (
+        <ul className="mt-1 space-y-0.5 text-sm">
+          {failing.map((check) => (
+            <li key={check.label} className="flex justify-between gap-3">
+              <span>{check.label}</span>
+              <span className="figures whitespace-nowrap text-right text-brick">
+                {pct(check.actual)} — {gap(check)}
+              </span>
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      {outcome && fixer ? <FixSuggestionView outcome={outcome} fixer={fixer} /> : null}
+      {fixer && failing.length > 0 && !showFix ? (
+        <Button size="sm" variant="quiet" className="mt-1 px-0 text-pod-dark" onClick={() => setAsked(true)}>
+          How to meet it
+        </Button>
+      ) : null}
+    </li>
+  );
+}
