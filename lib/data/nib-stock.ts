@@ -40,17 +40,19 @@ export async function getNibStock({
   const lots = await executor.select({ id: beanLots.id, code: beanLots.code, massReceivedKg: beanLots.massReceivedKg }).from(beanLots).where(scope);
   if (lots.length === 0) return new Map();
   const ids = lots.map((l) => l.id);
-  const [records, used, [ws]] = await Promise.all([
-    executor.select().from(processingRecords).where(and(eq(processingRecords.workspaceId, workspaceId), inArray(processingRecords.lotId, ids))),
-    executor
-      .select({ lotId: runLines.lotId, grams: sql<string>`sum(${runLines.actualGrams})` })
-      .from(runLines)
-      .innerJoin(productionRuns, eq(productionRuns.id, runLines.runId))
-      .innerJoin(batches, and(eq(batches.id, productionRuns.batchId), eq(batches.status, "completed")))
-      .where(and(eq(runLines.workspaceId, workspaceId), eq(runLines.consumesNibs, true), inArray(runLines.lotId, ids)))
-      .groupBy(runLines.lotId),
-    executor.select({ estimate: workspaces.estimatedNibYieldPercent }).from(workspaces).where(eq(workspaces.id, workspaceId)),
-  ]);
+  // One after another: inside a transaction the queries share one connection.
+  const records = await executor
+    .select()
+    .from(processingRecords)
+    .where(and(eq(processingRecords.workspaceId, workspaceId), inArray(processingRecords.lotId, ids)));
+  const used = await executor
+    .select({ lotId: runLines.lotId, grams: sql<string>`sum(${runLines.actualGrams})` })
+    .from(runLines)
+    .innerJoin(productionRuns, eq(productionRuns.id, runLines.runId))
+    .innerJoin(batches, and(eq(batches.id, productionRuns.batchId), eq(batches.status, "completed")))
+    .where(and(eq(runLines.workspaceId, workspaceId), eq(runLines.consumesNibs, true), inArray(runLines.lotId, ids)))
+    .groupBy(runLines.lotId);
+  const [ws] = await executor.select({ estimate: workspaces.estimatedNibYieldPercent }).from(workspaces).where(eq(workspaces.id, workspaceId));
   const usedByLot = new Map(used.map((u) => [u.lotId, new Decimal(u.grams).div(1000)]));
   const out = new Map<string, NibStock>();
   for (const lot of lots) {
