@@ -12,3 +12,4 @@ export * from "./lots";
 export * from "./batches";
 export * from "./purchases";
 export * from "./labels";
+export * from "./costing";
