@@ -38,3 +38,6 @@ export * from "./reference/nutrition-factors";
 export * from "./reference/label-nutrients";
 export * from "./reference/label-names";
 export * from "./reference/allergens";
+export * from "./least-cost-types";
+export { solveLeastCost } from "./least-cost";
+export { loadLpSolver, type LpSolver, type LpSolverLoadOptions } from "./least-cost-highs";
