@@ -15,6 +15,7 @@ export interface CostOptions {
   labourPerKg?: DecimalInput;
   /** Per kg of finished chocolate. */
   overheadPerKg?: DecimalInput;
+  overheadPerBar?: DecimalInput;
   /** Bars in one case; a whole number ≥ 1. */
   barsPerCase?: DecimalInput;
 }
@@ -43,7 +44,7 @@ export type CostResult =
     }
   | { ok: false; reason: string; missingPriceLines?: number[] };
 
-type Amounts = Record<"bar" | "loss" | "packaging" | "labourBar" | "labourKg" | "overheadKg", Decimal>;
+type Amounts = Record<"bar" | "loss" | "packaging" | "labourBar" | "labourKg" | "overheadKg" | "overheadBar", Decimal>;
 
 const OPTION_NAMES: ReadonlyArray<[keyof Amounts, keyof CostOptions, string]> = [
   ["bar", "barMassGrams", "The bar mass"],
@@ -52,6 +53,7 @@ const OPTION_NAMES: ReadonlyArray<[keyof Amounts, keyof CostOptions, string]> = 
   ["labourBar", "labourPerBar", "Labour per bar"],
   ["labourKg", "labourPerKg", "Labour per kg"],
   ["overheadKg", "overheadPerKg", "Overhead per kg"],
+  ["overheadBar", "overheadPerBar", "Overhead per bar"],
 ];
 
 /** Reads the amounts of CostOptions: each a number ≥ 0, missing = 0 (the bar mass is required). */
@@ -72,7 +74,7 @@ function readAmounts(options: Partial<CostOptions>): Amounts | string {
  * Costs a recipe (lines with ingredient.pricePerKg): per kg going in, per kg of finished
  * chocolate after process loss, per bar and per case, with a per-bar breakdown.
  * costPerBar = bar kg × (costPerKgFinished + labourPerKg + overheadPerKg) + packagingPerBar +
- * labourPerBar. All exact decimals (the loss division aside, 64 digits). Fails with a reason,
+ * labourPerBar + overheadPerBar. All exact decimals (the loss division aside, 64 digits). Fails with a reason,
  * and the indexes of lines without a price, instead of guessing a missing price.
  */
 export function costRecipe(lines: readonly RecipeLine[], options: CostOptions): CostResult {
@@ -95,7 +97,7 @@ export function costRecipe(lines: readonly RecipeLine[], options: CostOptions): 
     ingredients: barKg.times(cost.perKg),
     processLoss: barKg.times(finished.minus(cost.perKg)),
     labour: barKg.times(v.labourKg).plus(v.labourBar),
-    overhead: barKg.times(v.overheadKg),
+    overhead: barKg.times(v.overheadKg).plus(v.overheadBar),
     packaging: v.packaging,
   };
   const perBar = parts.ingredients.plus(parts.processLoss).plus(parts.labour).plus(parts.overhead).plus(parts.packaging);
