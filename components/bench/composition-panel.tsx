@@ -53,7 +53,7 @@ export function CompositionPanel({ composition }: { composition: CompositionFigu
             Label cocoa %
             <span className="block text-xs text-cocoa-500">EU “cocoa solids: X % minimum”, inclusions deducted, rounded down</span>
           </dt>
-          <dd className="figures text-right text-lg font-bold" data-testid="label-cocoa">
+          <dd className="figures whitespace-nowrap text-right text-lg font-bold" data-testid="label-cocoa">
             {pct(composition.cocoaSolidsStatement, 0)}
           </dd>
         </div>

@@ -41,40 +41,72 @@ function FixSuggestionView({ outcome, fixer }: { outcome: FixOutcome; fixer: Fix
   );
 }
 
-/** One category of one authority: meets, or which limits fail by how much, and a way to meet it. */
+function Header({ result }: { result: StandardResult }) {
+  return (
+    <div className="flex items-start justify-between gap-3">
+      <div>
+        <p className="font-semibold first-letter:uppercase">{result.category}</p>
+        <p className="text-xs text-cocoa-500">{result.reference}</p>
+      </div>
+      <Badge tone={result.pass ? "meets" : "short"}>{result.pass ? "meets" : "does not meet"}</Badge>
+    </div>
+  );
+}
+
+/**
+ * One category of one authority: meets, or which limits fail by how much, and a
+ * way to meet it. Failing categories the recipe does not aim at stay folded.
+ */
 export function StandardCategory({ result, fixer, aimed }: { result: StandardResult; fixer?: Fixer; aimed?: boolean }) {
   const [asked, setAsked] = useState(false);
   const failing = result.checks.filter((c) => !c.pass);
   const showFix = fixer !== undefined && failing.length > 0 && (aimed || asked);
   // Several engine runs: only when shown, and again only when the figures change.
   const outcome = useMemo(() => (showFix ? fixer.suggest(result) : null), [showFix, fixer, result]);
-  return (
-    <li className="py-2" data-testid={`standard-${result.authority}-${result.category}`}>
-      <div className="flex items-start justify-between gap-3">
-        <div>
-          <p className="font-semibold first-letter:uppercase">{result.category}</p>
-          <p className="text-xs text-cocoa-500">{result.reference}</p>
-        </div>
-        <Badge tone={result.pass ? "meets" : "short"}>{result.pass ? "meets" : "does not meet"}</Badge>
-      </div>
-      {failing.length > 0 ? (
-        <ul className="mt-1 space-y-0.5 text-sm">
-          {failing.map((check) => (
-            <li key={check.label} className="flex justify-between gap-3">
-              <span>{check.label}</span>
-              <span className="figures whitespace-nowrap text-right text-brick">
-                {pct(check.actual)} — {gap(check)}
-              </span>
-            </li>
-          ))}
-        </ul>
-      ) : null}
+  const testId = `standard-${result.authority}-${result.category}`;
+  if (failing.length === 0) {
+    return (
+      <li className="py-2" data-testid={testId}>
+        <Header result={result} />
+      </li>
+    );
+  }
+  const body = (
+    <>
+      <ul className="mt-1 space-y-0.5 text-sm">
+        {failing.map((check) => (
+          <li key={check.label} className="flex justify-between gap-3">
+            <span>{check.label}</span>
+            <span className="figures whitespace-nowrap text-right text-brick">
+              {pct(check.actual)} — {gap(check)}
+            </span>
+          </li>
+        ))}
+      </ul>
       {outcome && fixer ? <FixSuggestionView outcome={outcome} fixer={fixer} /> : null}
-      {fixer && failing.length > 0 && !showFix ? (
+      {fixer && !showFix ? (
         <Button size="sm" variant="quiet" className="mt-1 px-0 text-pod-dark" onClick={() => setAsked(true)}>
           How to meet it
         </Button>
       ) : null}
+    </>
+  );
+  if (aimed) {
+    return (
+      <li className="py-2" data-testid={testId}>
+        <Header result={result} />
+        {body}
+      </li>
+    );
+  }
+  return (
+    <li className="py-2" data-testid={testId}>
+      <details>
+        <summary className="cursor-pointer list-none [&::-webkit-details-marker]:hidden">
+          <Header result={result} />
+        </summary>
+        {body}
+      </details>
     </li>
   );
 }

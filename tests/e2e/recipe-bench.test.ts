@@ -1,0 +1,108 @@
+import { randomBytes } from "node:crypto";
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { DEMO_PEOPLE } from "@/db/seed";
+import { launchBrowser } from "./browser";
+import { E2E_BASE_URL } from "./config";
+import { BenchPage } from "./pages/bench-page";
+import { SignInPage } from "./pages/sign-in-page";
+
+let theoContext: BrowserContext;
+let maraContext: BrowserContext;
+
+const theo = DEMO_PEOPLE.find((p) => p.role === "formulator")!;
+const mara = DEMO_PEOPLE.find((p) => p.role === "owner")!;
+
+async function signedIn(context: BrowserContext, email: string): Promise<Page> {
+  const page = context.pages()[0] ?? (await context.newPage());
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.signIn(email);
+  await page.waitForURL(`${E2E_BASE_URL}/overview`);
+  return page;
+}
+
+const nibs = "Cocoa nibs (roasted)";
+const sugar = "Sugar (sucrose)";
+const butter = "Cocoa butter";
+
+beforeAll(async () => {
+  theoContext = await launchBrowser();
+  maraContext = await launchBrowser();
+});
+afterAll(async () => {
+  await theoContext?.close();
+  await maraContext?.close();
+});
+
+describe("the recipe bench in the browser", () => {
+  it("drags a slider keeping 100 %, saves, survives a reload, resolves a conflict with a second editor, and compares versions", async () => {
+    // Theo starts a recipe from the classic dark starting point.
+    const page = await signedIn(theoContext, theo.email);
+    await page.goto(`${E2E_BASE_URL}/recipes/new`);
+    const name = `Bench trial ${randomBytes(3).toString("hex")}`;
+    await page.getByLabel("Name").fill(name);
+    await page.getByRole("button", { name: "Create and open the bench" }).click();
+    await page.waitForURL(/\/recipes\/[0-9a-f-]{36}$/);
+    const bench = new BenchPage(page);
+    await page.getByTestId("composition-panel").waitFor();
+    const recipeId = bench.recipeId();
+    expect(await bench.exact(nibs)).toBe("64.0");
+    expect(await bench.figure("totalDryCocoaSolids")).toBe("70.0 %");
+
+    // Dragging the nibs slider to the right with the mouse moves the figures and keeps the total at 100 %.
+    await bench.drag(nibs, 40);
+    const dragged = Number(await bench.exact(nibs));
+    expect(dragged).toBeGreaterThan(64);
+    expect(await bench.total()).toBe("100.0 %");
+    expect(await bench.figure("totalDryCocoaSolids")).not.toBe("70.0 %");
+    await bench.save("Dragged the nibs up");
+    await bench.waitForSaved(2);
+
+    // Mara, in another browser, saves v3 from v2.
+    const maraPage = await signedIn(maraContext, mara.email);
+    const maraBench = new BenchPage(maraPage);
+    await maraBench.open(recipeId);
+    await maraBench.press(sugar, "ArrowRight", 5);
+    expect(await maraBench.total()).toBe("100.0 %");
+    await maraBench.save("More sugar");
+    await maraBench.waitForSaved(3);
+
+    // Theo, still on v2, keeps working; his draft survives a reload.
+    const before = Number(await bench.exact(butter));
+    await bench.press(butter, "Shift+ArrowRight");
+    const mine = await bench.exact(butter);
+    expect(mine).toBe((before + 1).toFixed(1));
+    await page.waitForTimeout(400); // the draft is kept a quarter second after the last change
+    await page.reload();
+    await page.getByTestId("draft-banner").waitFor();
+    expect(await bench.exact(butter)).toBe(mine);
+    expect(await bench.total()).toBe("100.0 %");
+
+    // Saving conflicts with Mara's v3: both are shown, and Theo keeps his as v4.
+    await bench.save("More butter");
+    await bench.conflict().waitFor();
+    expect(await page.getByRole("dialog").getByRole("heading").first().textContent()).toBe("v3 was saved while you worked");
+    expect(await bench.conflict().getByRole("row", { name: /Sugar \(sucrose\)/ }).count()).toBe(1);
+    await page.getByRole("button", { name: "Save mine as v4" }).click();
+    await bench.waitForSaved(4);
+    expect(await bench.exact(butter)).toBe(mine);
+
+    // History lists the four versions; comparing v3 with v4 shows what differs.
+    await page.goto(`${E2E_BASE_URL}/recipes/${recipeId}/history`);
+    for (const v of [1, 2, 3, 4]) expect(await page.getByTestId(`version-v${v}`).count()).toBe(1);
+    await page.getByLabel("Compare").selectOption("3");
+    await page.getByLabel("with").selectOption("4");
+    await page.getByRole("button", { name: "Compare", exact: true }).click();
+    await page.waitForURL(/compare\?a=3&b=4/);
+    const butterRow = page.getByTestId(`diff-${await ingredientIdOf(page, butter)}`);
+    expect(await butterRow.textContent()).toMatch(/\+/);
+    expect(await page.getByTestId("diff-costPerBar").count()).toBe(1);
+  });
+});
+
+/** The line's ingredient id, read from the comparison's row (rows are keyed by ingredient). */
+async function ingredientIdOf(page: Page, name: string): Promise<string> {
+  const row = page.locator('[data-testid^="diff-"]').filter({ hasText: name }).first();
+  return ((await row.getAttribute("data-testid")) ?? "").slice("diff-".length);
+}
