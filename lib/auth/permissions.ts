@@ -45,6 +45,15 @@ export const permissionTable = {
   "purchases.manage": ["owner", "buyer"],
   /** Add and retire machines and weighing stations. */
   "machines.manage": ["owner", "production"],
+
+  /**
+   * See cost settings, supplier comparisons and margins. Production and viewers
+   * also may when the owner turns on the workspace's "show costs to everyone"
+   * setting: that is checked in lib/auth/costs.ts, never here.
+   */
+  "costs.read": ["owner", "buyer", "formulator"],
+  /** Change cost settings and the chosen supplier of each ingredient. */
+  "costs.edit": ["owner", "buyer"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissionTable;

@@ -7,3 +7,4 @@ export * from "./combination";
 export * from "./flags";
 export * from "./sensitivity";
 export * from "./report";
+export * from "./comparison-csv";

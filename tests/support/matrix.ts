@@ -34,6 +34,8 @@ export const expectedRights: Record<Permission, Role[]> = {
   "batches.plan": ["owner", "production"],
   "purchases.manage": ["owner", "buyer"],
   "machines.manage": ["owner", "production"],
+  "costs.read": ["owner", "buyer", "formulator"],
+  "costs.edit": ["owner", "buyer"],
 };
 
 export type MatrixContext = { team: TeamFixture; other: TeamFixture; caller: Role | "signed-out" | "outsider" };
