@@ -2,39 +2,18 @@ import "server-only";
 import Decimal from "decimal.js";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db/client";
-import { batches, batchLines, ingredients, roastPresets, type ChocolateType, type IngredientKind, type StoredLoad } from "@/db/schema";
+import { batches, batchLines, ingredients, roastPresets, type IngredientKind } from "@/db/schema";
 import { batchMassKg } from "@/lib/batches/batch-mass";
-import { precisionWarnings } from "@/lib/batches/precision";
+import { batchLineRowsOf, batchRowOf, buildPlan, type ScaledPlan } from "@/lib/batches/build-plan";
 import { invalid, notFound } from "@/lib/errors";
-import { scaleBatch } from "@/lib/formulation";
 import { MAX_BATCH_KG, type PlanBatchInput, type PreviewBatchInput } from "@/lib/validation/batches";
-import { getMachine, getStation, type MachineRecord, type StationRecord } from "./machines";
+import { getMachine, getStation } from "./machines";
 import { plain } from "./numeric";
 import { getRecipe } from "./recipes";
 import { getVersion } from "./recipes-versions";
 import { insertWithNextCode } from "./sequence-code";
 
-export type PlannedLine = {
-  position: number;
-  ingredientId: string;
-  ingredientName: string;
-  ingredientKind: IngredientKind;
-  percent: string;
-  allergens: string[];
-  massGrams: string;
-};
-
-export type ScaledPlan = {
-  recipe: { id: string; name: string; chocolateType: ChocolateType };
-  version: { id: string; versionNo: number; barMassGrams: string };
-  station: StationRecord;
-  machine: MachineRecord | null;
-  requestedMassGrams: string;
-  totalMassGrams: string;
-  lines: PlannedLine[];
-  loads: StoredLoad[];
-  notes: string[];
-};
+export type { PlannedLine, ScaledPlan } from "@/lib/batches/build-plan";
 
 const sizeError = (message: string) => invalid(message, { amount: [message] });
 
@@ -57,28 +36,16 @@ export async function scalePlan({ workspaceId, input }: { workspaceId: string; i
   ]);
   const massKg = batchMassKg(input.amount, input.unit, version.barMassGrams);
   if (new Decimal(massKg).gt(MAX_BATCH_KG)) throw sizeError("That is more than 1,000 t in one batch. Check the unit.");
-  const scaled = scaleBatch(version.lines, { totalMassKg: massKg, resolutionGrams: station.resolutionGrams, machineCapacityKg: machine?.capacityKg });
-  if (!scaled.ok) throw sizeError(scaled.reason);
-  const kinds = await ingredientKinds(workspaceId, version.lines.map((l) => l.ingredientId));
-  return {
+  const built = buildPlan({
     recipe: { id: recipe.id, name: recipe.name, chocolateType: recipe.chocolateType },
-    version: { id: version.id, versionNo: version.versionNo, barMassGrams: plain(version.barMassGrams) },
+    version: { ...version, barMassGrams: plain(version.barMassGrams), lines: version.lines.map((l) => ({ ...l, percent: plain(l.percent) })) },
+    kinds: await ingredientKinds(workspaceId, version.lines.map((l) => l.ingredientId)),
     station,
     machine,
-    requestedMassGrams: scaled.requestedMassGrams,
-    totalMassGrams: scaled.totalMassGrams,
-    lines: scaled.lines.map((l, i) => ({
-      position: i + 1,
-      ingredientId: l.ingredientId,
-      ingredientName: l.name,
-      ingredientKind: kinds.get(l.ingredientId) ?? "other",
-      percent: plain(l.percent),
-      allergens: l.allergens,
-      massGrams: l.massGrams,
-    })),
-    loads: scaled.loads,
-    notes: [...scaled.notes, ...precisionWarnings(scaled.lines, scaled.totalMassGrams, station.resolutionGrams)],
-  };
+    massKg,
+  });
+  if (!built.ok) throw sizeError(built.reason);
+  return built.plan;
 }
 
 async function ingredientKinds(workspaceId: string, ids: string[]): Promise<Map<string, IngredientKind>> {
@@ -128,29 +95,12 @@ export async function planBatch({
         const [row] = await sp
           .insert(batches)
           .values({
+            ...batchRowOf(plan),
             workspaceId,
             code,
-            recipeId: plan.recipe.id,
-            versionId: plan.version.id,
-            versionNo: plan.version.versionNo,
-            recipeName: plan.recipe.name,
-            chocolateType: plan.recipe.chocolateType,
-            barMassGrams: plan.version.barMassGrams,
             plannedFor: input.plannedFor,
             requestedAmount: input.amount,
             requestedUnit: input.unit,
-            requestedMassGrams: plan.requestedMassGrams,
-            totalMassGrams: plan.totalMassGrams,
-            resolutionGrams: plan.station.resolutionGrams,
-            stationId: plan.station.id,
-            stationName: plan.station.name,
-            stationCapacityKg: plan.station.capacityKg,
-            machineId: plan.machine?.id ?? null,
-            machineName: plan.machine?.name ?? null,
-            machineCapacityKg: plan.machine?.capacityKg ?? null,
-            loadCount: plan.loads.length,
-            loads: plan.loads,
-            scaleNotes: plan.notes,
             roastPresetName: preset?.name ?? null,
             roastTemperatureC: preset?.temperatureC ?? null,
             roastMinutes: preset?.minutes ?? null,
@@ -160,18 +110,7 @@ export async function planBatch({
             createdById: userId,
           })
           .returning({ id: batches.id });
-        await sp.insert(batchLines).values(
-          plan.lines.map((l) => ({
-            batchId: row!.id,
-            position: l.position,
-            ingredientId: l.ingredientId,
-            ingredientName: l.ingredientName,
-            ingredientKind: l.ingredientKind,
-            percent: l.percent,
-            massGrams: l.massGrams,
-            allergens: l.allergens,
-          })),
-        );
+        await sp.insert(batchLines).values(batchLineRowsOf(row!.id, plan));
         return { id: row!.id, code };
       },
     }),

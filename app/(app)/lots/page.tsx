@@ -6,6 +6,7 @@ import { Table, Td, Th } from "@/components/ui/table";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 import { listLots } from "@/lib/data/lots";
+import { getNibStock } from "@/lib/data/nib-stock";
 import { getWorkspaceBaseCurrency } from "@/lib/data/workspaces";
 import { formatDate, formatKg, formatMoney, formatPercent } from "@/lib/format";
 
@@ -13,9 +14,10 @@ export const metadata: Metadata = { title: "Bean lots" };
 
 export default async function LotsPage() {
   const viewer = await requireViewer();
-  const [lots, base] = await Promise.all([
+  const [lots, base, nibStock] = await Promise.all([
     listLots({ workspaceId: viewer.workspace.id }),
     getWorkspaceBaseCurrency({ workspaceId: viewer.workspace.id }),
+    getNibStock({ workspaceId: viewer.workspace.id }),
   ]);
   return (
     <div className="space-y-6">
@@ -50,6 +52,7 @@ export default async function LotsPage() {
               <Th>Arrived</Th>
               <Th numeric>Received</Th>
               <Th numeric>Nibs</Th>
+              <Th numeric>Nibs in stock</Th>
               <Th numeric>Nib yield</Th>
               <Th numeric>Nib cost per kg</Th>
             </tr>
@@ -70,6 +73,7 @@ export default async function LotsPage() {
                 <Td>{formatDate(l.arrivedOn)}</Td>
                 <Td numeric>{formatKg(l.massReceivedKg, 1)}</Td>
                 <Td numeric>{formatKg(l.chain.nibMassKg, 1)}</Td>
+                <Td numeric>{nibStock.get(l.id)?.winnowed ? formatKg(nibStock.get(l.id)!.inStockKg, 1) : "—"}</Td>
                 <Td numeric>
                   {formatPercent(l.chain.cumulativeYieldPercent)}
                   {l.chain.nibMassEstimated ? <Badge className="ml-2">estimate</Badge> : null}

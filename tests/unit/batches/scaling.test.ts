@@ -1,6 +1,7 @@
 import Decimal from "decimal.js";
 import { describe, expect, it } from "vitest";
 import { batchMassKg } from "@/lib/batches/batch-mass";
+import { groupLoads, rangeLabel } from "@/lib/batches/group-loads";
 import { precisionWarnings } from "@/lib/batches/precision";
 import { sheetLoads } from "@/lib/batches/sheet";
 import { scaleBatch } from "@/lib/formulation";
@@ -85,5 +86,16 @@ describe("batch scaling for the batch sheet", () => {
     const r = scale("60", "1");
     const [load] = sheetLoads({ resolutionGrams: "1", stationCapacityKg: "15", loads: r.loads, lines: dark });
     expect(load!.lines.filter((l) => l.overScale).map((l) => l.ingredientName)).toEqual(["Cocoa nibs", "Sugar"]); // 38.4 kg and 17.04 kg > 15 kg
+  });
+});
+
+describe("grouping loads of a big batch", () => {
+  it("prints 100 t on a 60 kg refiner as a few compositions covering all 1,667 loads", () => {
+    const r = scale("100000", "100", "60");
+    const groups = groupLoads(sheetLoads({ resolutionGrams: "100", stationCapacityKg: null, loads: r.loads, lines: dark }));
+    expect(groups.length).toBeLessThan(10);
+    expect(groups.flatMap((g) => g.loadNos).sort((a, b) => a - b)).toEqual(Array.from({ length: 1667 }, (_, i) => i + 1));
+    for (const g of groups) for (const n of g.loadNos) expect(r.loads[n - 1]!.lineMassesGrams).toEqual(g.load.lines.map((l) => l.massGrams));
+    expect(rangeLabel([1, 2, 3, 5, 7, 8])).toBe("1–3, 5, 7–8");
   });
 });

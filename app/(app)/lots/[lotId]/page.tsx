@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { LotBatches } from "@/components/batches/lot-batches";
 import { LotCostForm } from "@/components/lots/lot-cost-form";
 import { CutTestForm } from "@/components/lots/cut-test-form";
 import { CutTestTable } from "@/components/lots/cut-test-table";
@@ -61,6 +62,7 @@ export default async function LotPage({ params }: { params: Promise<{ lotId: str
         </Card>
         <NibCostCard nibCost={nibCost} chain={chain} baseCurrency={baseCurrency} costs={detail.costs} lot={lot} processingCost={detail.processingCost} />
       </div>
+      <LotBatches workspaceId={viewer.workspace.id} lotId={lot.id} />
       <Card>
         <CardHeader title="Processing records" description="Insert-only: a wrong record is corrected by a new one, with a note." />
         <ProcessingTable records={detail.records} />
