@@ -6,6 +6,7 @@
 import { and, eq } from "drizzle-orm";
 import type { NodePgDatabase } from "drizzle-orm/node-postgres";
 import { hashPassword } from "../lib/auth/password";
+import { seedBatches } from "./demo/batches";
 import type { DemoSeeder } from "./demo/context";
 import { seedIngredients } from "./demo/ingredients";
 import { seedRecipes } from "./demo/recipes";
@@ -30,7 +31,7 @@ type Database = NodePgDatabase<typeof schema>;
  * Each feature's demo data, in dependency order (ingredients before recipes…).
  * Every seeder is idempotent.
  */
-const featureSeeders: DemoSeeder[] = [seedIngredients, seedRecipes, seedLots];
+const featureSeeders: DemoSeeder[] = [seedIngredients, seedRecipes, seedLots, seedBatches];
 
 export async function seedDemo(db: Database): Promise<{ workspaceId: string }> {
   return db.transaction(async (tx) => {
