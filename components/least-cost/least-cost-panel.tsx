@@ -1,0 +1,81 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Card, CardHeader } from "@/components/ui/card";
+import { solveLeastCost, type LeastCostResult, type RecipeLine } from "@/lib/formulation";
+import type { ChocolateType } from "@/lib/recipes/types";
+import { LeastCostBounds } from "./least-cost-bounds";
+import { categoriesFor, defaultCategories, toProblem, type LeastCostSettings } from "./least-cost-problem";
+import { LeastCostResultView } from "./least-cost-result";
+import { LeastCostSettingsForm } from "./least-cost-settings";
+import { useLpSolver } from "./use-lp-solver";
+
+export type LeastCostPanelProps = {
+  /** The bench's lines: ingredient (with today's price per kg) and percent. */
+  lines: RecipeLine[];
+  /** The bench's locks, one per line. */
+  locked: readonly boolean[];
+  chocolateType: ChocolateType;
+  /** The recipe's cocoa target, e.g. "70". */
+  target: string | null;
+  currency: string;
+  /** Bench grid step in percent. */
+  resolution: string;
+  /** Receives the proposed percents, one per line, to become the unsaved draft. */
+  onApply: (percents: string[]) => void;
+};
+
+/**
+ * The least-cost mix: the cheapest recipe of the bench's ingredients that meets the chosen
+ * standards, the cocoa target and each line's bounds, solved in the browser (HiGHS) by the
+ * engine's solveLeastCost. Applying only changes the draft; the bench's save makes a version.
+ */
+export function LeastCostPanel({ lines, locked, chocolateType, target, currency, resolution, onApply }: LeastCostPanelProps) {
+  const solver = useLpSolver();
+  const categories = useMemo(() => categoriesFor(chocolateType), [chocolateType]);
+  const [settings, setSettings] = useState<LeastCostSettings>(() => ({
+    categories: defaultCategories(chocolateType),
+    targetMode: target ? "atLeast" : "none",
+    target: target ?? "",
+    bounds: lines.map(() => ({ min: "", max: "" })),
+    objective: "cost",
+  }));
+  const [result, setResult] = useState<LeastCostResult | null>(null);
+  // Lines added or removed on the bench get empty bounds.
+  const bounds = lines.map((_, i) => settings.bounds[i] ?? { min: "", max: "" });
+  const chosen = settings.categories.map((key) => categories.find((c) => `${c.authority}:${c.category}` === key)).filter((c) => c !== undefined);
+
+  function run() {
+    if (solver.status !== "ready") return;
+    setResult(solveLeastCost(solver.solver, toProblem(lines, locked, { ...settings, bounds }, resolution)));
+  }
+
+  return (
+    <Card data-testid="least-cost-panel">
+      <CardHeader title="Least-cost mix" description="The cheapest mix of these ingredients at today's prices that still meets the standards and your target." />
+      <div className="space-y-4">
+        <LeastCostSettingsForm settings={{ ...settings, bounds }} categories={categories} onChange={setSettings} />
+        <LeastCostBounds lines={lines} locked={locked} bounds={bounds} onChange={(b) => setSettings({ ...settings, bounds: b })} />
+        <div className="flex items-center gap-3">
+          <Button onClick={run} disabled={solver.status !== "ready" || lines.length === 0}>
+            Find least-cost mix
+          </Button>
+          {solver.status === "loading" ? <span className="text-sm text-cocoa-500">Loading the solver…</span> : null}
+          {solver.status === "failed" ? <span className="text-sm text-brick">{solver.message}</span> : null}
+        </div>
+        {result ? (
+          <LeastCostResultView
+            result={result}
+            categories={chosen}
+            currency={currency}
+            onApply={(percents) => {
+              onApply(percents);
+              setResult(null);
+            }}
+          />
+        ) : null}
+      </div>
+    </Card>
+  );
+}

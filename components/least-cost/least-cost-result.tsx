@@ -1,0 +1,105 @@
+"use client";
+
+import { Badge } from "@/components/ui/badge";
+import { Button } from "@/components/ui/button";
+import { Table, Td, Th } from "@/components/ui/table";
+import type { CategoryRef, LeastCostResult, LeastCostSolution } from "@/lib/formulation";
+import { money, pct, signed } from "@/lib/recipes/format";
+
+function Comparison({ solution, currency }: { solution: LeastCostSolution; currency: string }) {
+  return (
+    <Table data-testid="least-cost-proposal">
+      <thead>
+        <tr>
+          <Th>Line</Th>
+          <Th numeric>Now</Th>
+          <Th numeric>Proposed</Th>
+          <Th numeric>Change</Th>
+        </tr>
+      </thead>
+      <tbody>
+        {solution.lines.map((line) => (
+          <tr key={line.index}>
+            <Td>{line.name}</Td>
+            <Td numeric>{pct(line.currentPercent, 2)}</Td>
+            <Td numeric>{pct(line.percent, 2)}</Td>
+            <Td numeric>{signed(line.change, 2)}</Td>
+          </tr>
+        ))}
+        <tr>
+          <Td className="font-semibold">Ingredient cost per kg</Td>
+          <Td numeric>{money(solution.currentCostPerKg, currency)}</Td>
+          <Td numeric data-testid="least-cost-cost">{money(solution.costPerKg, currency)}</Td>
+          <Td numeric data-testid="least-cost-saving">{solution.saving === undefined ? "—" : signed(String(-Number(solution.saving)), 2)}</Td>
+        </tr>
+      </tbody>
+    </Table>
+  );
+}
+
+/** The proposal beside the current mix, what holds the cost up, the standards check, and apply. */
+export function LeastCostResultView({
+  result,
+  categories,
+  currency,
+  onApply,
+}: {
+  result: LeastCostResult;
+  categories: CategoryRef[];
+  currency: string;
+  onApply: (percents: string[]) => void;
+}) {
+  if (!result.ok) {
+    return (
+      <div role="alert" className="space-y-2 rounded-lg border border-brick/40 bg-brick-light p-3 text-sm" data-testid="least-cost-conflict">
+        <p className="font-semibold text-brick">{result.message}</p>
+        {result.kind === "infeasible" ? (
+          <ul className="list-disc pl-5 text-cocoa-700">
+            {result.conflict.map((c) => (
+              <li key={c.id}>
+                {c.label}
+                {c.clause ? <span className="text-cocoa-500"> ({c.clause})</span> : null}
+              </li>
+            ))}
+          </ul>
+        ) : null}
+        {result.kind === "infeasible" ? <p className="text-cocoa-700">Loosen one of these and run it again.</p> : null}
+      </div>
+    );
+  }
+  const binding = result.constraints.filter((c) => c.binding);
+  const chosen = result.evaluation.standards.filter((s) => categories.some((c) => c.authority === s.authority && c.category === s.category));
+  return (
+    <div className="space-y-3" data-testid="least-cost-result">
+      <Comparison solution={result} currency={currency} />
+      <div className="flex flex-wrap gap-2" data-testid="least-cost-standards">
+        {chosen.map((s) => (
+          <Badge key={`${s.authority} ${s.category}`} tone={s.pass ? "meets" : "short"}>
+            {s.authority} {s.category}: {s.pass ? "meets" : "short"}
+          </Badge>
+        ))}
+      </div>
+      {binding.length > 0 ? (
+        <div className="text-sm">
+          <p className="font-semibold text-cocoa-700">Holding the cost up</p>
+          <ul className="list-disc pl-5 text-cocoa-700" data-testid="least-cost-binding">
+            {binding.map((c) => (
+              <li key={c.id}>{c.label}</li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+      {result.notes.length > 0 ? (
+        <ul className={result.verified ? "text-sm text-cocoa-500" : "text-sm text-brick"}>
+          {result.notes.map((n) => (
+            <li key={n}>{n}</li>
+          ))}
+        </ul>
+      ) : null}
+      <p className="text-xs text-cocoa-500">
+        Rounded to the {result.rounding.resolution} % step and checked again by the standards check; the unrounded optimum costs {money(result.optimalCostPerKg, currency, 4)}. Confirm the category with your local regulations before labelling.
+      </p>
+      <Button onClick={() => onApply(result.lines.map((l) => l.percent))}>Apply as draft</Button>
+    </div>
+  );
+}
