@@ -154,7 +154,7 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
         <CompositionPanel composition={evaluation.composition} />
         <CostPanel lines={engineLines} barMassGrams={state.barMassGrams} currency={currency} onBarMass={canEdit ? (v) => dispatch({ type: "set-bar-mass", value: v }) : undefined} />
         {canEdit && state.lines.length >= 2 ? (
-          <TargetPanel lines={engineLines} locked={locked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent} onApply={applyPercents} />
+          <TargetPanel lines={engineLines} locked={locked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
         ) : null}
         {canEdit && state.lines.length >= 2 ? (
           <LeastCostPanel lines={engineLines} locked={locked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />
