@@ -13,9 +13,11 @@ export type ParsedCsv =
  * MAX_PRICE_LIST_ROWS rows.
  */
 export function parsePriceListCsv(text: string): ParsedCsv {
+  // Guess the delimiter on non-blank lines only (blank lines would look like one-column rows),
+  // then split the whole file with it so row numbers stay those of the file.
+  const guess = Papa.parse<string[]>(text, { delimiter: "", delimitersToGuess: [",", ";", "\t", "|"], skipEmptyLines: "greedy", preview: 50 });
   const result = Papa.parse<string[]>(text, {
-    delimiter: "",
-    delimitersToGuess: [",", ";", "\t", "|"],
+    delimiter: guess.meta.delimiter || ",",
     skipEmptyLines: false,
     // One more than the cap (plus the header), so "too many rows" can be told apart.
     preview: MAX_PRICE_LIST_ROWS + 50,
