@@ -10,6 +10,7 @@ import { seedBatches } from "./demo/batches";
 import type { DemoSeeder } from "./demo/context";
 import { seedIngredients } from "./demo/ingredients";
 import { seedRecipes } from "./demo/recipes";
+import { seedLabels } from "./demo/labels";
 import { seedLots } from "./demo/lots";
 import * as schema from "./schema";
 import { memberships, users, workspaces, type Role } from "./schema";
@@ -31,7 +32,7 @@ type Database = NodePgDatabase<typeof schema>;
  * Each feature's demo data, in dependency order (ingredients before recipes…).
  * Every seeder is idempotent.
  */
-const featureSeeders: DemoSeeder[] = [seedIngredients, seedRecipes, seedLots, seedBatches];
+const featureSeeders: DemoSeeder[] = [seedIngredients, seedRecipes, seedLabels, seedLots, seedBatches];
 
 export async function seedDemo(db: Database): Promise<{ workspaceId: string }> {
   return db.transaction(async (tx) => {
