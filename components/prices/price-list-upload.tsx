@@ -11,8 +11,7 @@ import type { PriceListCheck } from "@/lib/price-lists/check";
 import { DATE_FORMATS, type ColumnMapping } from "@/lib/price-lists/fields";
 import { MAX_PRICE_LIST_BYTES, MAX_PRICE_LIST_ROWS } from "@/lib/price-lists/limits";
 import { ColumnMapper } from "./column-mapper";
-import { PriceListRows } from "./price-list-rows";
-import { QuotesTable } from "./quotes-table";
+import { PriceListVerdicts } from "./price-list-verdicts";
 
 type Problem = { message: string; fieldErrors: Record<string, string[] | undefined> };
 type Options = { decimalSeparator: "." | ","; dateFormat: string; defaultValidFrom: string };
@@ -40,6 +39,7 @@ export function PriceListUpload({ suppliers, initialSupplierId, today }: { suppl
   const [problem, setProblem] = useState<Problem | null>(null);
   const [outcome, setOutcome] = useState<ImportOutcome | null>(null);
   const [pending, start] = useTransition();
+  const unmapped = check ? Object.keys(check.mappingProblems).length > 0 : false;
 
   const body = (withMapping: ColumnMapping | null, opts: Options) => {
     const f = new FormData();
@@ -110,7 +110,7 @@ export function PriceListUpload({ suppliers, initialSupplierId, today }: { suppl
           <section className="space-y-4">
             <h2 className="text-lg font-bold">1. Match the columns</h2>
             <p className="text-sm text-cocoa-500">
-              {check.fileName}: {check.rows.length} rows, read as {check.encoding}, separated by “{check.delimiter === "\t" ? "tab" : check.delimiter}”.
+              {check.fileName}: {check.rowCount} rows, read as {check.encoding}, separated by “{check.delimiter === "\t" ? "tab" : check.delimiter}”.
               {check.sameFileImportedAt ? ` This same file was imported on ${check.sameFileImportedAt.slice(0, 10)}; its rows will not be added twice.` : ""}
             </p>
             <div className="grid gap-4 sm:grid-cols-3">
@@ -124,40 +124,22 @@ export function PriceListUpload({ suppliers, initialSupplierId, today }: { suppl
                 <Input id="pl-from" type="date" value={options.defaultValidFrom} onChange={(e) => setOptions((o) => ({ ...o, defaultValidFrom: e.target.value }))} onBlur={() => changeOptions({})} />
               </Field>
             </div>
-            <ColumnMapper headers={check.headers} sample={check.sample} mapping={mapping} errors={problem?.fieldErrors ?? {}} onChange={(m) => { setMapping(m); read(m); }} />
+            <ColumnMapper
+              headers={check.headers}
+              sample={check.sample}
+              mapping={mapping}
+              errors={{ ...Object.fromEntries(Object.entries(check.mappingProblems).map(([f, m]) => [f, [m]])), ...(problem?.fieldErrors ?? {}) }}
+              onChange={(m) => { setMapping(m); read(m); }}
+            />
           </section>
 
-          <section className="space-y-4">
-            <h2 className="text-lg font-bold">2. Check every row</h2>
-            <p className="text-sm" data-testid="price-list-counts">
-              <strong>{check.counts.new}</strong> new quotes to import · {check.counts.already_imported} already recorded · {check.counts.duplicate_in_file} repeated in
-              the file · <span className={check.counts.invalid ? "font-semibold text-brick" : undefined}>{check.counts.invalid} refused</span>
+          {unmapped ? (
+            <p role="status" data-testid="price-list-counts" className="rounded-lg bg-pod-light px-3 py-2 text-sm text-pod-dark">
+              Choose the ingredient and price columns above; every row is then checked.
             </p>
-            <PriceListRows rows={check.rows} baseCurrency={check.baseCurrency} />
-          </section>
-
-          <section className="space-y-4">
-            <h2 className="text-lg font-bold">3. Import</h2>
-            {outcome ? (
-              <p role="status" data-testid="price-list-outcome" className="rounded-lg bg-sage-light px-3 py-2 text-sm text-sage">
-                Imported {outcome.imported} quote{outcome.imported === 1 ? "" : "s"} from {check.supplier.name}. {outcome.duplicates} already recorded, {outcome.invalid} refused.
-              </p>
-            ) : (
-              <div className="flex flex-wrap items-center gap-4">
-                <Button onClick={runImport} disabled={pending || check.counts.new === 0}>
-                  {pending ? "Importing…" : `Import ${check.counts.new} new quote${check.counts.new === 1 ? "" : "s"}`}
-                </Button>
-                <span className="text-sm text-cocoa-500">All of them in one go, or none. Refused rows are skipped; fix them and upload again later.</span>
-              </div>
-            )}
-          </section>
-
-          {outcome ? (
-            <section className="space-y-4">
-              <h2 className="text-lg font-bold">{check.supplier.name}: quotes now</h2>
-              <QuotesTable filter={{ supplierId: check.supplier.id }} hide={["supplier"]} />
-            </section>
-          ) : null}
+          ) : (
+            <PriceListVerdicts check={check} outcome={outcome} pending={pending} onImport={runImport} />
+          )}
         </>
       ) : null}
     </div>

@@ -25,6 +25,10 @@ export async function importPriceList(
   args: Parameters<typeof checkPriceList>[0] & { userId: string },
 ): Promise<ImportOutcome> {
   const check = await checkPriceList(args);
+  const unmapped = Object.entries(check.mappingProblems);
+  if (unmapped.length > 0) {
+    throw invalid(unmapped.map(([, m]) => m).join(" "), Object.fromEntries(unmapped.map(([f, m]) => [`mapping.${f}`, [m]])));
+  }
   const fresh = check.rows.filter((r) => r.status === "new");
   if (fresh.length === 0 && check.counts.already_imported === 0 && check.counts.duplicate_in_file === 0) {
     throw invalid("No row of this file can be imported. Fix the rows listed and upload it again.");

@@ -10,7 +10,7 @@ import { invalid } from "@/lib/errors";
 import { percentChange, quotePerKgInBase } from "@/lib/pricing/convert";
 import { quoteDedupeKey } from "@/lib/pricing/dedupe-key";
 import { decodePriceList } from "./decode";
-import { guessMapping, type ColumnMapping, type DateFormat, type DecimalSeparator } from "./fields";
+import { guessMapping, mappingProblems, type ColumnMapping, type DateFormat, type DecimalSeparator, type PriceListField } from "./fields";
 import { parsePriceListCsv } from "./parse";
 import { readPriceListRow, type IngredientRef, type ReadRow } from "./read-row";
 
@@ -39,9 +39,13 @@ export type PriceListCheck = {
   encoding: string;
   delimiter: string;
   headers: string[];
+  /** Data rows in the file (judged or not). */
+  rowCount: number;
   /** First rows as written, for the mapping step. */
   sample: string[][];
   mapping: ColumnMapping;
+  /** Required fields not mapped yet; while any is listed, no row is judged. */
+  mappingProblems: Partial<Record<PriceListField, string>>;
   supplier: { id: string; name: string; currency: string };
   baseCurrency: string;
   rows: RowResult[];
@@ -93,8 +97,10 @@ export async function checkPriceList(args: {
   const byName = new Map<string, IngredientRef>(library.map((i) => [nameKey(i.name), { id: i.id, name: i.name, archived: i.archivedAt !== null }]));
   const readOptions = { ...args.options, mapping, defaultCurrency: supplier.currency };
 
+  const problems = mappingProblems(mapping);
+  const judged = Object.keys(problems).length === 0 ? parsed.rows : [];
   const seen = new Map<string, number>();
-  const rows: RowResult[] = parsed.rows.map(({ rowNumber, cells }) => {
+  const rows: RowResult[] = judged.map(({ rowNumber, cells }) => {
     const read = readPriceListRow(cells, readOptions, (name) => byName.get(nameKey(name)));
     const blank = { rowNumber, perKgBase: null, previousPerKgBase: null, changePercent: null };
     if (!read.ok) {
@@ -134,6 +140,8 @@ export async function checkPriceList(args: {
     headers: parsed.headers,
     sample: parsed.rows.slice(0, 5).map((r) => r.cells),
     mapping,
+    mappingProblems: problems,
+    rowCount: parsed.rows.length,
     supplier: { id: supplier.id, name: supplier.name, currency: supplier.currency },
     baseCurrency,
     rows,

@@ -53,13 +53,16 @@ export function guessMapping(headers: readonly string[]): ColumnMapping {
 
 const columnIndex = z.number().int().min(0).max(200).nullable();
 
-/** The mapping a person confirmed, as JSON: each of our fields to a column index or null. */
+/**
+ * The mapping a person confirmed, as JSON: each of our fields to a column index
+ * or null. A column may hold one field only. Whether the required fields are
+ * mapped is checked separately (mappingProblems), so an incomplete mapping can
+ * still be previewed.
+ */
 export const columnMappingSchema = z
   .object(Object.fromEntries(PRICE_LIST_FIELDS.map((f) => [f.key, columnIndex])) as Record<PriceListField, typeof columnIndex>)
   .strict()
   .superRefine((m, ctx) => {
-    if (m.ingredient === null) ctx.addIssue({ code: "custom", path: ["ingredient"], message: "Choose the column with the ingredient names." });
-    if (m.price === null) ctx.addIssue({ code: "custom", path: ["price"], message: "Choose the column with the prices." });
     const seen = new Map<number, string>();
     for (const f of PRICE_LIST_FIELDS) {
       const i = m[f.key];
@@ -69,6 +72,14 @@ export const columnMappingSchema = z
       seen.set(i, f.label);
     }
   });
+
+/** What a mapping still lacks before rows can be judged: the ingredient and price columns. */
+export function mappingProblems(m: ColumnMapping): Partial<Record<PriceListField, string>> {
+  const problems: Partial<Record<PriceListField, string>> = {};
+  if (m.ingredient === null) problems.ingredient = "Choose the column with the ingredient names.";
+  if (m.price === null) problems.price = "Choose the column with the prices.";
+  return problems;
+}
 
 export const DATE_FORMATS = ["YYYY-MM-DD", "DD/MM/YYYY", "MM/DD/YYYY", "DD.MM.YYYY"] as const;
 export type DateFormat = (typeof DATE_FORMATS)[number];

@@ -157,10 +157,21 @@ describe("a file that is not a usable CSV", () => {
     expect(long.body.error?.message).toMatch(new RegExp(`more than ${MAX_PRICE_LIST_ROWS} rows`));
   });
 
-  it("refuses a mapping without the price column", async () => {
+  it("previews a mapping without the price column without judging rows, and refuses to import it", async () => {
     const mapping = JSON.stringify({ ingredient: 0, price: null, currency: null, unit: null, packKg: null, minimumOrderKg: null, validFrom: null, validUntil: null });
     const res = await preview(csvFile(GOOD), { mapping });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ mappingProblems: { price: "Choose the column with the prices." }, rows: [], rowCount: 3 });
+    const done = await upload(csvFile(GOOD), { mapping });
+    expect(done.status).toBe(422);
+    expect(done.body.error?.message).toBe("Choose the column with the prices.");
+    expect(await quoteCount()).toBe(0);
+  });
+
+  it("refuses a column mapped to two fields", async () => {
+    const mapping = JSON.stringify({ ingredient: 0, price: 0, currency: null, unit: null, packKg: null, minimumOrderKg: null, validFrom: null, validUntil: null });
+    const res = await preview(csvFile(GOOD), { mapping });
     expect(res.status).toBe(422);
-    expect(JSON.stringify(res.body)).toMatch(/Choose the column with the prices/);
+    expect(JSON.stringify(res.body)).toMatch(/already mapped to “Ingredient”/);
   });
 });
