@@ -128,7 +128,7 @@ export async function BatchSheet({ batch, printedOn }: { batch: BatchDetail; pri
             ))}
           </ul>
           <p className="mt-1 text-[9pt] text-cocoa-500">{GUIDE_SOURCE}</p>
-          <p className="mt-2 rounded border border-brick px-2 py-1 text-[9.5pt] font-semibold text-brick" role="note">
+          <p className="sheet-keep mt-2 rounded border border-brick px-2 py-1 text-[9.5pt] font-semibold text-brick" role="note">
             {PROCESS_CAUTION}
           </p>
         </SheetSection>
