@@ -1,12 +1,12 @@
 "use client";
 
-import { useState } from "react";
+import { memo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/select";
 import type { BenchIngredient } from "@/lib/recipes/types";
 
 /** Adds a library ingredient as a new line at 0 % (archived ones and those already in use are not offered). */
-export function AddLine({ library, used, onAdd }: { library: BenchIngredient[]; used: ReadonlySet<string>; onAdd: (ingredientId: string) => void }) {
+export const AddLine = memo(function AddLine({ library, used, onAdd }: { library: BenchIngredient[]; used: ReadonlySet<string>; onAdd: (ingredientId: string) => void }) {
   const options = library.filter((i) => !i.archived && !used.has(i.id)).map((i) => ({ value: i.id, label: i.name }));
   const [choice, setChoice] = useState<string>("");
   const chosen = options.some((o) => o.value === choice) ? choice : "";
@@ -33,4 +33,4 @@ export function AddLine({ library, used, onAdd }: { library: BenchIngredient[]; 
       </Button>
     </div>
   );
-}
+});

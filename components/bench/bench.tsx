@@ -81,18 +81,24 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
     () => (deferredLines === engineLines ? evaluation.standards : evaluateRecipe({ lines: deferredLines }).standards),
     [deferredLines, engineLines, evaluation],
   );
-  const locked = useMemo(() => state.lines.map((l) => l.locked), [state.lines]);
+  // Stable while only percents move, so the panels that read it are not redrawn on every step.
+  const lockKey = state.lines.map((l) => (l.locked ? "1" : "0")).join("");
+  const locked = useMemo(() => [...lockKey].map((c) => c === "1"), [lockKey]);
+  const used = useMemo(() => new Set(state.lines.map((l) => l.ingredientId)), [state.lines]);
+  const addLine = useCallback((id: string) => dispatch({ type: "add-line", ingredientId: id }), []);
+  const setBarMass = useCallback((v: string) => dispatch({ type: "set-bar-mass", value: v }), []);
+  const deferredLocked = useDeferredValue(locked);
   const applyPercents = useCallback((percents: string[]) => dispatch({ type: "set-percents", percents }), []);
   const fixer = useMemo<Fixer | undefined>(
     () =>
       canEdit
         ? {
-            suggest: (result) => suggestFix(deferredLines, result, { locked, resolution: RESOLUTION }),
+            suggest: (result) => suggestFix(deferredLines, result, { locked: deferredLocked, resolution: RESOLUTION }),
             apply: applyPercents,
             lineName: (i) => deferredLines[i]?.ingredient.name ?? "",
           }
         : undefined,
-    [canEdit, deferredLines, locked, applyPercents],
+    [canEdit, deferredLines, deferredLocked, applyPercents],
   );
 
   async function save(onBase: number) {
@@ -143,7 +149,7 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
           <LineList lines={state.lines} library={byId} readOnly={!canEdit} message={state.message} dispatch={dispatch} />
           {canEdit ? (
             <>
-              <AddLine library={library} used={new Set(state.lines.map((l) => l.ingredientId))} onAdd={(id) => dispatch({ type: "add-line", ingredientId: id })} />
+              <AddLine library={library} used={used} onAdd={addLine} />
               <SaveBar baseVersionNo={draftBase} dirty={dirty} saving={saving} note={note} error={error} onNote={(n) => dispatch({ type: "set-note", note: n })} onSave={() => save(draftBase)} />
             </>
           ) : null}
@@ -152,9 +158,9 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
       </div>
       <div className="space-y-6">
         <CompositionPanel composition={evaluation.composition} />
-        <CostPanel lines={engineLines} barMassGrams={state.barMassGrams} currency={currency} onBarMass={canEdit ? (v) => dispatch({ type: "set-bar-mass", value: v }) : undefined} />
+        <CostPanel lines={engineLines} barMassGrams={state.barMassGrams} currency={currency} onBarMass={canEdit ? setBarMass : undefined} />
         {canEdit && state.lines.length >= 2 ? (
-          <TargetPanel lines={engineLines} locked={locked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
+          <TargetPanel lines={deferredLines} locked={deferredLocked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
         ) : null}
         {canEdit && state.lines.length >= 2 ? (
           <LeastCostPanel lines={engineLines} locked={locked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />

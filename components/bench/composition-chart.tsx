@@ -1,5 +1,6 @@
 "use client";
 
+import { memo } from "react";
 import { Bar, BarChart, ResponsiveContainer, XAxis, YAxis } from "recharts";
 import type { CompositionFigures } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
@@ -18,7 +19,7 @@ export const MIX_PARTS = [
 ] as const satisfies ReadonlyArray<{ key: keyof CompositionFigures; label: string; colour: string }>;
 
 /** One stacked bar of the finished product by part; figures stay exact in the list beside it. */
-export function CompositionChart({ composition }: { composition: CompositionFigures }) {
+export const CompositionChart = memo(function CompositionChart({ composition }: { composition: CompositionFigures }) {
   // Numbers only for drawing widths; every figure shown as text comes from the engine's strings.
   const row = Object.fromEntries(MIX_PARTS.map((p) => [p.key, Number(composition[p.key])]));
   const summary = MIX_PARTS.filter((p) => Number(composition[p.key]) > 0)
@@ -37,4 +38,4 @@ export function CompositionChart({ composition }: { composition: CompositionFigu
       </ResponsiveContainer>
     </div>
   );
-}
+});

@@ -1,6 +1,6 @@
 "use client";
 
-import { useLayoutEffect } from "react";
+import { useDeferredValue, useLayoutEffect } from "react";
 import { Card, CardHeader } from "@/components/ui/card";
 import type { CompositionFigures } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
@@ -20,11 +20,13 @@ const FIGURES = [
 /** What is in the bar, percent of the finished product, with the label's cocoa figure. */
 export function CompositionPanel({ composition }: { composition: CompositionFigures }) {
   useLayoutEffect(() => markPaintAfterCommit(), [composition]);
+  // The figures follow every move at once; the chart (Recharts, heavier) catches up at a lower priority.
+  const charted = useDeferredValue(composition);
   const hasInclusions = Number(composition.inclusions) > 0;
   return (
     <Card data-testid="composition-panel">
       <CardHeader title="Composition" description="Percent of the finished bar." />
-      <CompositionChart composition={composition} />
+      <CompositionChart composition={charted} />
       <ul className="mt-2 flex flex-wrap gap-x-3 gap-y-1 text-xs text-cocoa-500" aria-hidden>
         {MIX_PARTS.filter((p) => Number(composition[p.key]) > 0).map((p) => (
           <li key={p.key} className="flex items-center gap-1">

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { memo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
@@ -27,7 +27,7 @@ function defaultLines(lines: RecipeLine[]): { adjust: number; balance: number } 
 }
 
 /** "Hit 70 %": moves one line against another so a figure lands exactly on the target (solveForTarget). */
-export function TargetPanel({
+export const TargetPanel = memo(function TargetPanel({
   lines,
   locked,
   chocolateType,
@@ -109,4 +109,4 @@ export function TargetPanel({
       ) : null}
     </Card>
   );
-}
+});

@@ -17,8 +17,8 @@ export type FixSuggestion = {
 
 export type FixOutcome = { ok: true; fix: FixSuggestion } | { ok: false; reason: string };
 
-// Only the few smallest changes are re-checked in full: each check is a full evaluation.
-const VERIFIED_CANDIDATES = 6;
+// Only the smallest changes are re-checked in full: each check is an evaluation (one authority).
+const VERIFIED_CANDIDATES = 24;
 
 type Candidate = { adjustIndex: number; balanceIndex: number; percents: string[]; size: Decimal };
 
@@ -38,10 +38,11 @@ function candidatesFor(lines: RecipeLine[], check: StandardCheck, locked: readon
       if (a === b || locked[a] || locked[b]) continue;
       const solved = solveForTarget(lines, { quantity: check.quantity, value, basis: check.basis }, a, b, { resolution, direction });
       if (!solved.ok) continue;
-      const to = new Decimal(solved.lines[a]!.percent);
-      const size = to.minus(new Decimal(String(lines[a]!.percent))).abs();
-      if (size.isZero()) continue;
-      out.push({ adjustIndex: a, balanceIndex: b, percents: solved.lines.map((l) => l.percent), size });
+      const delta = new Decimal(solved.lines[a]!.percent).minus(new Decimal(String(lines[a]!.percent)));
+      if (delta.isZero()) continue;
+      // Told as "raise X, lower Y": the line that goes up is the one adjusted.
+      const [up, down] = delta.isPositive() ? [a, b] : [b, a];
+      out.push({ adjustIndex: up, balanceIndex: down, percents: solved.lines.map((l) => l.percent), size: delta.abs() });
     }
   }
   return out.sort((x, y) => x.size.cmp(y.size));
@@ -66,7 +67,10 @@ export function suggestFix(
   const resolution = options.resolution ?? "0.1";
   const failing = result.checks.filter((c) => !c.pass);
   if (failing.length === 0) return { ok: false, reason: "This category is already met." };
-  const candidates = failing.flatMap((check) => candidatesFor(lines, check, locked, resolution));
+  const seen = new Set<string>();
+  const candidates = failing
+    .flatMap((check) => candidatesFor(lines, check, locked, resolution))
+    .filter((c) => !seen.has(c.percents.join()) && seen.add(c.percents.join()));
   if (candidates.length === 0) {
     return { ok: false, reason: "No change of two unlocked lines meets it: unlock a line or add an ingredient that carries what is missing." };
   }
