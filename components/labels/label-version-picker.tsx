@@ -14,7 +14,7 @@ export function LabelVersionPicker({ recipeId, current, releasedNo, versions }: 
           className={cn("rounded-md px-2.5 py-1 font-semibold text-cocoa-700 hover:bg-cream-deep", n === current && "bg-pod-light text-pod-dark")}
         >
           v{n}
-          {n === releasedNo ? <span className="ml-1 font-normal text-sage">released</span> : null}
+          {n === releasedNo ? <span className="font-normal text-sage"> released</span> : null}
         </Link>
       ))}
     </nav>
