@@ -6,7 +6,7 @@ import { getCostSettings, type CostSettingsRecord } from "./cost-settings";
 import { listPicks } from "./cost-picks";
 import { listIngredientSources } from "./cost-sources";
 import { getRecipe, type RecipeRecord } from "./recipes";
-import { getVersion, listVersionNumbers, type VersionDetail } from "./recipes-versions";
+import { getVersion, listVersionNumbers, listVersions, type VersionDetail } from "./recipes-versions";
 
 export type RecipeCosting = {
   recipe: Pick<RecipeRecord, "id" | "name" | "chocolateType" | "latestVersionNo">;
@@ -29,27 +29,34 @@ export type RecipeCosting = {
  * on day `on`: its lines with every current source of each ingredient, the
  * recipe's cost settings and picks, and the report the engine computes from
  * them (lib/costing). Reads only. A recipe without a saved version is not found.
+ * `releasedOnly` (roles that read released versions only, i.e. production when
+ * the owner shares costs) defaults to the released version and refuses others.
  */
 export async function loadRecipeCosting({
   workspaceId,
   recipeId,
   versionNo,
   on,
+  releasedOnly = false,
 }: {
   workspaceId: string;
   recipeId: string;
   versionNo?: number;
   on: string;
+  releasedOnly?: boolean;
 }): Promise<RecipeCosting> {
   const recipe = await getRecipe({ workspaceId, recipeId });
-  const wanted = versionNo ?? recipe.latestVersionNo;
-  if (!wanted) throw notFound("A saved version of this recipe");
+  const wanted = versionNo ?? (releasedOnly ? recipe.releasedVersionNo : recipe.latestVersionNo);
+  if (!wanted) throw notFound(releasedOnly ? "A released version of this recipe" : "A saved version of this recipe");
   const [version, versionNumbers, settingsRecord, picks] = await Promise.all([
     getVersion({ workspaceId, recipeId, versionNo: wanted }),
-    listVersionNumbers({ workspaceId, recipeId }),
+    releasedOnly
+      ? listVersions({ workspaceId, recipeId, releasedOnly: true }).then((vs) => vs.map((v) => v.versionNo).reverse())
+      : listVersionNumbers({ workspaceId, recipeId }),
     getCostSettings({ workspaceId, recipeId }),
     listPicks({ workspaceId, recipeId }),
   ]);
+  if (releasedOnly && !version.released) throw notFound(`Version v${wanted}`);
   const { baseCurrency, sources } = await listIngredientSources({ workspaceId, ingredientIds: version.lines.map((l) => l.ingredientId), on });
   const lines: CostLine[] = version.lines.map((l) => {
     const s = sources.get(l.ingredientId);

@@ -67,9 +67,6 @@ export const costVisibilitySchema = z.object({ show: checkboxSchema }).strict();
 /** The version a costing page or export is about; none = the latest. */
 export const costingQuerySchema = z.object({ version: versionNoSchema.optional() }).strict();
 
-/** A what-if price per kg as typed (the page computes with it; nothing is saved). */
-export const whatIfPriceSchema = decimalText({ label: "the new price per kg", max: "1000000", decimals: 6 });
-
 /** "recipeId:versionNo" or "recipeId:latest", as the compare page's `v` parameters carry them. */
 export const compareRefSchema = z
   .string()

@@ -8,8 +8,10 @@ import { GET as getComparison } from "@/app/api/costing/[recipeId]/comparison/ro
 import { saveCostSettingsAction, setCostVisibilityAction } from "@/app/(app)/costing/actions";
 import { db } from "@/db/client";
 import { canSeeCosts } from "@/lib/auth/costs";
+import { setShowCostsToAll } from "@/lib/data/cost-visibility";
 import { getCostSettings, listCostSettings, saveCostSettings } from "@/lib/data/cost-settings";
 import { loadRecipeCosting } from "@/lib/data/costing";
+import { releaseVersion } from "@/lib/data/recipes-releases";
 import { deleteExchangeRate, listExchangeRates, setBaseCurrency } from "@/lib/data/exchange-rates";
 import { costedRecipe, makeLeadSupplier, parseSettings, settingsForm } from "../support/costing";
 import { createTeam, signInAs, type TeamFixture } from "../support/fixtures";
@@ -87,6 +89,8 @@ describe("who sees costs", () => {
   it("keeps production and viewers out until the owner allows them", async () => {
     await signInAs(team.people.production.id, team.workspaceId);
     expect((await csv()).status).toBe(403);
+    // Production reads released versions only, costs included.
+    await releaseVersion({ workspaceId: team.workspaceId, userId: team.people.formulator.id, recipeId: fx.recipeId, versionNo: 1 });
     freshRequest();
     await signInAs(team.people.owner.id, team.workspaceId);
     expect(await setCostVisibilityAction({ show: "on" })).toMatchObject({ ok: true, data: { show: true } });
@@ -102,6 +106,12 @@ describe("who sees costs", () => {
     freshRequest();
     await signInAs(team.people.viewer.id, team.workspaceId);
     expect((await csv()).status).toBe(403);
+  });
+
+  it("shows production only released versions once costs are shared", async () => {
+    await setShowCostsToAll({ workspaceId: team.workspaceId, show: true });
+    await signInAs(team.people.production.id, team.workspaceId);
+    expect((await csv()).status).toBe(404);
   });
 
   it("lets only the owner change the setting", async () => {

@@ -1,6 +1,7 @@
 import { apiRoute } from "@/lib/api/route";
 import { routeId } from "@/lib/api/route-id";
 import { requireCostReader } from "@/lib/auth/costs";
+import { can } from "@/lib/auth/permissions";
 import { comparisonCsv } from "@/lib/costing";
 import { csvResponse } from "@/lib/csv/export";
 import { loadRecipeCosting } from "@/lib/data/costing";
@@ -19,7 +20,7 @@ export const GET = apiRoute({
   handler: async ({ input, viewer, params }) => {
     await requireCostReader(viewer);
     const on = isoDay(new Date());
-    const costing = await loadRecipeCosting({ workspaceId: viewer.workspace.id, recipeId: routeId(params.recipeId, "That recipe"), versionNo: input.version, on });
+    const costing = await loadRecipeCosting({ workspaceId: viewer.workspace.id, recipeId: routeId(params.recipeId, "That recipe"), versionNo: input.version, on, releasedOnly: !can(viewer.role, "recipes.read") });
     const csv = comparisonCsv(costing.report, { recipeName: costing.recipe.name, versionNo: costing.version.versionNo, currency: costing.baseCurrency, on });
     return csvResponse(csv, `${costing.recipe.name}-v${costing.version.versionNo}-suppliers.csv`);
   },
