@@ -42,6 +42,7 @@ export function RecipeHeader({ recipe, current, readsAll, actions }: { recipe: R
         <nav aria-label="Recipe" className="flex gap-1">
           {tab(`/recipes/${recipe.id}`, "Bench", current === "bench")}
           {tab(`/recipes/${recipe.id}/history`, "History", current === "history")}
+          {tab(`/costing/${recipe.id}`, "Costs", false)}
           {tab(`/recipes/${recipe.id}/label`, "Label", false)}
         </nav>
       ) : null}

@@ -8,6 +8,7 @@ export const navItems: ReadonlyArray<{ href: string; label: string; permission: 
   { href: "/prices", label: "Prices", permission: "ingredients.read" },
   { href: "/recipes", label: "Recipes", permission: "recipes.readReleased" },
   { href: "/lots", label: "Bean lots", permission: "lots.read" },
+  { href: "/costing", label: "Costing", permission: "costs.read" },
   { href: "/batches", label: "Batches", permission: "batches.read" },
   { href: "/settings/members", label: "Team", permission: "workspace.read" },
   { href: "/settings/mailbox", label: "Mailbox", permission: "members.manage", demoOnly: true },
