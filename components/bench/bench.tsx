@@ -20,7 +20,6 @@ import { SaveBar } from "./save-bar";
 import type { Fixer } from "./standard-category";
 import { StandardsPanel } from "./standards-panel";
 import { TargetPanel } from "./target-panel";
-import { LeastCostPanel } from "@/components/least-cost/least-cost-panel";
 import { useChosenAuthorities } from "./use-chosen-authorities";
 import { clearLocalDraft, readLocalDraft, useLocalDraft, type StoredDraft } from "./use-local-draft";
 
@@ -161,9 +160,6 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
         <CostPanel lines={engineLines} barMassGrams={state.barMassGrams} currency={currency} onBarMass={canEdit ? setBarMass : undefined} />
         {canEdit && state.lines.length >= 2 ? (
           <TargetPanel lines={deferredLines} locked={deferredLocked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
-        ) : null}
-        {canEdit && state.lines.length >= 2 ? (
-          <LeastCostPanel lines={engineLines} locked={locked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />
         ) : null}
       </div>
       {theirs ? (
