@@ -8,7 +8,7 @@ function Row({ label, value, testId, strong }: { label: string; value: string; t
   return (
     <div className="flex justify-between gap-4 py-1.5">
       <dt className={strong ? "font-semibold" : undefined}>{label}</dt>
-      <dd className={strong ? "figures text-right font-bold" : "figures text-right"} data-testid={testId}>
+      <dd className={strong ? "figures whitespace-nowrap text-right font-bold" : "figures whitespace-nowrap text-right"} data-testid={testId}>
         {value}
       </dd>
     </div>

@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import { loadCostingPage } from "@/app/(app)/costing/load";
-import { ComparisonTable } from "@/components/costing/comparison-table";
 import { CostBreakdown } from "@/components/costing/cost-breakdown";
 import { CostsNotAllowed } from "@/components/costing/costs-not-allowed";
 import { PrintButton } from "@/components/costing/print-button";
+import { PrintComparison } from "@/components/costing/print-comparison";
 import { ScenarioCards } from "@/components/costing/scenario-cards";
 import { formatDate } from "@/lib/format";
 
@@ -40,8 +40,8 @@ export default async function PrintCostingPage({ params, searchParams }: PagePro
       <ScenarioCards report={report} currency={currency} />
       <CostBreakdown scenario={report.scenarios.chosen} settings={settings} currency={currency} barMassGrams={version.barMassGrams} />
       <section className="break-inside-avoid">
-        <h2 className="mb-2 text-lg font-bold">Suppliers (per kg)</h2>
-        <ComparisonTable recipeId={recipe.id} report={report} currency={currency} canEdit={false} />
+        <h2 className="mb-2 text-lg font-bold">Suppliers</h2>
+        <PrintComparison report={report} currency={currency} />
       </section>
       <p className="text-xs text-cocoa-500">Figures rounded for display; computed exactly. Supplier prices are the buyer&apos;s recorded quotes.</p>
     </main>
