@@ -17,8 +17,15 @@ export class LotPage {
     await form.getByRole("combobox", { name: "Step" }).click();
     await this.page.getByRole("option", { name: step, exact: true }).click();
     for (const [label, value] of Object.entries(fields)) await form.getByLabel(label, { exact: true }).fill(value);
+    // Wait for the new row itself: a success message may still be on screen from the step before.
+    const rows = this.page.getByTestId("processing-records").getByRole("row");
+    const before = (await this.page.getByTestId("processing-records").count()) ? await rows.count() : 1;
     await form.getByRole("button", { name: "Record step" }).click();
-    await form.getByTestId("form-success").waitFor();
+    await this.page.waitForFunction(
+      (n) => (document.querySelector('[data-testid="processing-records"]')?.querySelectorAll("tr").length ?? 0) > n,
+      before,
+      { timeout: 30_000 },
+    );
   }
 
   nibCost() {
