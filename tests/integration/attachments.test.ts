@@ -22,7 +22,7 @@ beforeEach(async () => {
 });
 
 const upload = (bytes: Uint8Array, name: string, type = "application/pdf") =>
-  uploadIngredientFile(formRequest(`/api/ingredients/${ingredientId}/files`, { file: new File([bytes], name, { type }), kind: "spec_sheet" }), params({ ingredientId }));
+  uploadIngredientFile(formRequest(`/api/ingredients/${ingredientId}/files`, { file: new File([new Uint8Array(bytes)], name, { type }), kind: "spec_sheet" }), params({ ingredientId }));
 
 describe("attaching a spec sheet", () => {
   it("stores a PDF under a generated key and gives it back byte for byte to members", async () => {
@@ -57,7 +57,7 @@ describe("attaching a spec sheet", () => {
   });
 
   it("refuses an oversize file: by its declared length before reading it, and by its real size", async () => {
-    const req = formRequest(`/api/ingredients/${ingredientId}/files`, { file: new File([tinyPdf()], "big.pdf") });
+    const req = formRequest(`/api/ingredients/${ingredientId}/files`, { file: new File([new Uint8Array(tinyPdf())], "big.pdf") });
     const declared = new Request(req, { headers: { ...Object.fromEntries(req.headers), "content-length": String(MAX_FILE_BYTES + 1_000_000) }, duplex: "half" } as RequestInit);
     const early = await uploadIngredientFile(declared, params({ ingredientId }));
     expect(early.status).toBe(413);
@@ -86,7 +86,7 @@ describe("who can reach a file", () => {
     const supplierId = (await makeSupplier(team.workspaceId)).id;
     freshRequest();
     await signInAs(team.people.buyer.id, team.workspaceId);
-    const ok = await uploadSupplierFile(formRequest(`/api/suppliers/${supplierId}/files`, { file: new File([tinyPdf()], "organic.pdf"), kind: "certificate" }), params({ supplierId }));
+    const ok = await uploadSupplierFile(formRequest(`/api/suppliers/${supplierId}/files`, { file: new File([new Uint8Array(tinyPdf())], "organic.pdf"), kind: "certificate" }), params({ supplierId }));
     expect(ok.status).toBe(200);
     expect((await upload(tinyPdf(), "spec.pdf")).status).toBe(403);
   });

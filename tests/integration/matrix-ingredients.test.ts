@@ -169,7 +169,7 @@ const rows: MatrixRow[] = [
     outsider: "not_found",
     run: async ({ team }) => {
       const ingredientId = (await makeIngredient(team.workspaceId)).id;
-      const req = formRequest(`/api/ingredients/${ingredientId}/files`, { file: new File([tinyPdf()], "spec.pdf") });
+      const req = formRequest(`/api/ingredients/${ingredientId}/files`, { file: new File([new Uint8Array(tinyPdf())], "spec.pdf") });
       return fromStatus((await uploadIngredientFile(req, params({ ingredientId }))).status);
     },
   },
@@ -199,7 +199,7 @@ const rows: MatrixRow[] = [
     outsider: "not_found",
     run: async ({ team }) => {
       const supplierId = (await makeSupplier(team.workspaceId)).id;
-      const req = formRequest(`/api/suppliers/${supplierId}/files`, { file: new File([tinyPdf()], "cert.pdf"), kind: "certificate" });
+      const req = formRequest(`/api/suppliers/${supplierId}/files`, { file: new File([new Uint8Array(tinyPdf())], "cert.pdf"), kind: "certificate" });
       return fromStatus((await uploadSupplierFile(req, params({ supplierId }))).status);
     },
   },

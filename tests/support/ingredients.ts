@@ -48,5 +48,5 @@ export function formRequest(path: string, fields: Record<string, string | Blob |
 
 /** A CSV file as a browser would upload it. */
 export function csvFile(text: string | Uint8Array, name = "prices.csv"): File {
-  return new File([text], name, { type: "text/csv" });
+  return new File([typeof text === "string" ? text : new Uint8Array(text)], name, { type: "text/csv" });
 }
