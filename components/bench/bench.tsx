@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useCallback, useDeferredValue, useEffect, useMemo, useReducer, useState } from "react";
+import { useCallback, useDeferredValue, useEffect, useLayoutEffect, useMemo, useReducer, useRef, useState } from "react";
 import { saveRecipeVersionAction } from "@/app/(app)/recipes/[recipeId]/actions";
 import { Card, CardHeader } from "@/components/ui/card";
 import { useToast } from "@/components/ui/toast";
@@ -31,6 +31,11 @@ export type BenchProps = {
   currency: string;
   canEdit: boolean;
 };
+
+function myCostPerBar(lines: RecipeLine[], barMassGrams: string): string | null {
+  const cost = costRecipe(lines, { barMassGrams });
+  return cost.ok ? cost.costPerBar : null;
+}
 
 function baseDraft(base: BenchProps["base"]): Draft {
   return { barMassGrams: tidy(base.barMassGrams), lines: base.lines.map((l) => ({ ingredientId: l.ingredientId, percent: tidy(l.percent), locked: false })) };
@@ -87,6 +92,14 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
   const addLine = useCallback((id: string) => dispatch({ type: "add-line", ingredientId: id }), []);
   const setBarMass = useCallback((v: string) => dispatch({ type: "set-bar-mass", value: v }), []);
   const deferredLocked = useDeferredValue(locked);
+  // The target panel reads the lines only when it solves: moving a slider leaves it alone.
+  const idKey = state.lines.map((l) => l.ingredientId).join(" ");
+  const lineIngredients = useMemo(() => (idKey ? idKey.split(" ") : []).map((id) => toIngredientSpec(byId.get(id)!)), [idKey, byId]);
+  const current = useRef({ lines: engineLines, locked });
+  useLayoutEffect(() => {
+    current.current = { lines: engineLines, locked };
+  });
+  const readCurrent = useCallback(() => current.current, []);
   const applyPercents = useCallback((percents: string[]) => dispatch({ type: "set-percents", percents }), []);
   const fixer = useMemo<Fixer | undefined>(
     () =>
@@ -138,7 +151,6 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
     dispatch({ type: "reset", draft: initial, baseVersionNo: base.versionNo });
   }
 
-  const cost = costRecipe(engineLines, { barMassGrams: state.barMassGrams });
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <div className="space-y-6">
@@ -159,7 +171,7 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
         <CompositionPanel composition={evaluation.composition} />
         <CostPanel lines={engineLines} barMassGrams={state.barMassGrams} currency={currency} onBarMass={canEdit ? setBarMass : undefined} />
         {canEdit && state.lines.length >= 2 ? (
-          <TargetPanel lines={deferredLines} locked={deferredLocked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
+          <TargetPanel ingredients={lineIngredients} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
         ) : null}
       </div>
       {theirs ? (
@@ -168,7 +180,7 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
             baseVersionNo: draftBase,
             lines: state.lines.map((l) => ({ ingredientId: l.ingredientId, name: byId.get(l.ingredientId)?.name ?? "", percent: l.percent })),
             composition: evaluation.composition,
-            costPerBar: cost.ok ? cost.costPerBar : null,
+            costPerBar: myCostPerBar(engineLines, state.barMassGrams),
           }}
           theirs={theirs}
           currency={currency}

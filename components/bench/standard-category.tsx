@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { memo, useMemo, useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import type { StandardCheck, StandardResult } from "@/lib/formulation";
@@ -57,8 +57,9 @@ function Header({ result }: { result: StandardResult }) {
  * One category of one authority: meets, or which limits fail by how much, and a
  * way to meet it. Failing categories the recipe does not aim at stay folded.
  */
-export function StandardCategory({ result, fixer, aimed }: { result: StandardResult; fixer?: Fixer; aimed?: boolean }) {
+export const StandardCategory = memo(function StandardCategory({ result, fixer, aimed }: CategoryProps) {
   const [asked, setAsked] = useState(false);
+  const [open, setOpen] = useState(false);
   const failing = result.checks.filter((c) => !c.pass);
   const showFix = fixer !== undefined && failing.length > 0 && (aimed || asked);
   // Several engine runs: only when shown, and again only when the figures change.
@@ -101,12 +102,23 @@ export function StandardCategory({ result, fixer, aimed }: { result: StandardRes
   }
   return (
     <li className="py-2" data-testid={testId}>
-      <details>
+      <details open={open} onToggle={(e) => setOpen(e.currentTarget.open)}>
         <summary className="cursor-pointer list-none [&::-webkit-details-marker]:hidden">
           <Header result={result} />
         </summary>
-        {body}
+        {open ? body : null}
       </details>
     </li>
   );
+}, sameShown);
+
+type CategoryProps = { result: StandardResult; fixer?: Fixer; aimed?: boolean };
+
+/** What a category shows: when none of it changed, the row is not redrawn (most rows, most moves). */
+function sameShown(a: CategoryProps, b: CategoryProps): boolean {
+  if (a.aimed !== b.aimed || a.result.pass !== b.result.pass || a.result.category !== b.result.category) return false;
+  // A new fixer means new lines: only a failing row can show a fix made from them.
+  if (!a.result.pass && a.fixer !== b.fixer) return false;
+  const shown = (r: StandardResult) => r.checks.filter((c) => !c.pass).map((c) => `${c.label}|${c.actual}|${c.shortBy}|${c.overBy}`).join(";");
+  return a.result.authority === b.result.authority && shown(a.result) === shown(b.result);
 }

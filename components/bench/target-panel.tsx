@@ -6,7 +6,7 @@ import { Card, CardHeader } from "@/components/ui/card";
 import { Field } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
 import { Select } from "@/components/ui/select";
-import { QUANTITIES, QUANTITY_LABELS, solveForTarget, type Quantity, type RecipeLine, type SolveBasis } from "@/lib/formulation";
+import { QUANTITIES, QUANTITY_LABELS, solveForTarget, type IngredientSpec, type Quantity, type RecipeLine, type SolveBasis } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
 import type { ChocolateType } from "@/lib/recipes/types";
 import { RESOLUTION } from "./bench-state";
@@ -19,37 +19,44 @@ const BASES: { value: SolveBasis; label: string }[] = [
 
 const quantityOptions = QUANTITIES.map((q) => ({ value: q, label: QUANTITY_LABELS[q].replace(/^./, (c) => c.toUpperCase()) }));
 
-function defaultLines(lines: RecipeLine[]): { adjust: number; balance: number } {
-  const by = (f: (l: RecipeLine) => number) => lines.reduce((best, l, i) => (f(l) > f(lines[best]!) ? i : best), 0);
-  const adjust = by((l) => Number(l.ingredient.cocoaSolidsNonFat ?? 0) + Number(l.ingredient.cocoaButter ?? 0));
-  const balance = by((l) => Number(l.ingredient.sugar ?? 0));
-  return { adjust, balance: balance === adjust ? (adjust + 1) % Math.max(lines.length, 1) : balance };
+/** The richest cocoa line against the sweetest one: the usual way to move the cocoa figure. */
+function defaultLines(ingredients: readonly IngredientSpec[]): { adjust: number; balance: number } {
+  const by = (f: (i: IngredientSpec) => number) => ingredients.reduce((best, ing, i) => (f(ing) > f(ingredients[best]!) ? i : best), 0);
+  const adjust = by((i) => Number(i.cocoaSolidsNonFat ?? 0) + Number(i.cocoaButter ?? 0));
+  const balance = by((i) => Number(i.sugar ?? 0));
+  return { adjust, balance: balance === adjust ? (adjust + 1) % Math.max(ingredients.length, 1) : balance };
 }
 
-/** "Hit 70 %": moves one line against another so a figure lands exactly on the target (solveForTarget). */
+/**
+ * "Hit 70 %": moves one line against another so a figure lands exactly on the
+ * target (solveForTarget). It reads the current lines only when asked to solve,
+ * so moving a slider does not redraw it.
+ */
 export const TargetPanel = memo(function TargetPanel({
-  lines,
-  locked,
+  ingredients,
+  read,
   chocolateType,
   target,
   onApply,
 }: {
-  lines: RecipeLine[];
-  locked: readonly boolean[];
+  /** The lines' ingredients, in order (stable while only percents move). */
+  ingredients: readonly IngredientSpec[];
+  read: () => { lines: RecipeLine[]; locked: readonly boolean[] };
   chocolateType: ChocolateType;
   target: string | null;
   onApply: (percents: string[]) => void;
 }) {
-  const defaults = defaultLines(lines);
+  const defaults = defaultLines(ingredients);
   const [quantity, setQuantity] = useState<Quantity>(chocolateType === "white" ? "cocoaButter" : "totalDryCocoaSolids");
   const [basis, setBasis] = useState<SolveBasis>("eu");
   const [value, setValue] = useState(target ?? "70");
   const [adjust, setAdjust] = useState(String(defaults.adjust));
   const [balance, setBalance] = useState(String(defaults.balance));
   const [outcome, setOutcome] = useState<{ ok: boolean; text: string; undo?: string[] } | null>(null);
-  const lineOptions = lines.map((l, i) => ({ value: String(i), label: l.ingredient.name }));
+  const lineOptions = ingredients.map((ing, i) => ({ value: String(i), label: ing.name }));
 
   function solve() {
+    const { lines, locked } = read();
     const a = Number(adjust);
     const b = Number(balance);
     if (!lines[a] || !lines[b]) return setOutcome({ ok: false, text: "Choose two lines of the recipe." });
@@ -87,7 +94,7 @@ export const TargetPanel = memo(function TargetPanel({
         </Field>
       </div>
       <div className="mt-4 flex items-center gap-3">
-        <Button onClick={solve} disabled={lines.length < 2}>
+        <Button onClick={solve} disabled={ingredients.length < 2}>
           Solve
         </Button>
         {outcome?.undo ? (
