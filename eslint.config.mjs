@@ -5,7 +5,7 @@ import nextTs from "eslint-config-next/typescript";
 export default defineConfig([
   ...nextVitals,
   ...nextTs,
-  globalIgnores([".next/**", ".data/**", "node_modules/**", "next-env.d.ts", "db/migrations/**"]),
+  globalIgnores([".next/**", ".next-*/**", "scripts/.*", ".data/**", "node_modules/**", "next-env.d.ts", "db/migrations/**"]),
   {
     // The engine is a pure leaf: it runs in the browser and on the server alike.
     files: ["lib/formulation/**/*.ts"],

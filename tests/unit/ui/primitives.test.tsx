@@ -40,10 +40,10 @@ describe("Button", () => {
   it("renders its child when asChild is set", () => {
     render(
       <Button asChild>
-        <a href="/recipes">Recipes</a>
+        <a href="#recipes">Recipes</a>
       </Button>,
     );
-    expect(screen.getByRole("link", { name: "Recipes" }).getAttribute("href")).toBe("/recipes");
+    expect(screen.getByRole("link", { name: "Recipes" }).getAttribute("href")).toBe("#recipes");
   });
 });
 
