@@ -1,12 +1,12 @@
 "use client";
 
 import { memo } from "react";
-import { Bar, BarChart, ResponsiveContainer, XAxis, YAxis } from "recharts";
+import { Bar, BarChart, Cell, ResponsiveContainer, XAxis, YAxis } from "recharts";
 import type { CompositionFigures } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
 
-/** The mix's parts in the order they are stacked, with our colours (display only). */
-export const MIX_PARTS = [
+/** The mix's parts in display order, with our colours (display only). */
+const MIX_PARTS = [
   { key: "cocoaButter", label: "Cocoa butter", colour: "#C9A27E" },
   { key: "cocoaSolidsNonFat", label: "Fat-free cocoa solids", colour: "#4A3328" },
   { key: "milkFat", label: "Milk fat", colour: "#EAD7B0" },
@@ -18,22 +18,28 @@ export const MIX_PARTS = [
   { key: "inclusions", label: "Inclusions", colour: "#7A5A3A" },
 ] as const satisfies ReadonlyArray<{ key: keyof CompositionFigures; label: string; colour: string }>;
 
-/** One stacked bar of the finished product by part; figures stay exact in the list beside it. */
+const ROW_HEIGHT = 22;
+
+/**
+ * One bar per part of the finished product (parts at 0 are left out). One Recharts
+ * series with a colour per bar: a single series redraws several times faster than
+ * a stack of nine. Every figure shown as text comes from the engine's strings.
+ */
 export const CompositionChart = memo(function CompositionChart({ composition }: { composition: CompositionFigures }) {
-  // Numbers only for drawing widths; every figure shown as text comes from the engine's strings.
-  const row = Object.fromEntries(MIX_PARTS.map((p) => [p.key, Number(composition[p.key])]));
-  const summary = MIX_PARTS.filter((p) => Number(composition[p.key]) > 0)
-    .map((p) => `${p.label} ${pct(composition[p.key])}`)
-    .join(", ");
+  // Numbers only for drawing lengths.
+  const rows = MIX_PARTS.map((p) => ({ ...p, value: Number(composition[p.key]) })).filter((r) => r.value > 0);
+  const summary = rows.map((r) => `${r.label} ${pct(composition[r.key])}`).join(", ");
   return (
-    <div role="img" aria-label={`The mix: ${summary}`} className="h-12 w-full">
+    <div role="img" aria-label={`The mix: ${summary}`} style={{ height: rows.length * ROW_HEIGHT + 4 }} className="w-full">
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={[row]} layout="vertical" margin={{ top: 0, right: 0, bottom: 0, left: 0 }} barCategoryGap={0}>
+        <BarChart data={rows} layout="vertical" margin={{ top: 2, right: 4, bottom: 2, left: 0 }} barCategoryGap={4}>
           <XAxis type="number" domain={[0, 100]} hide />
-          <YAxis type="category" hide />
-          {MIX_PARTS.map((p) => (
-            <Bar key={p.key} dataKey={p.key} stackId="mix" fill={p.colour} isAnimationActive={false} />
-          ))}
+          <YAxis type="category" dataKey="label" width={128} tickLine={false} axisLine={false} tick={{ fontSize: 12, fill: "#6E5647" }} interval={0} />
+          <Bar dataKey="value" isAnimationActive={false} radius={3}>
+            {rows.map((r) => (
+              <Cell key={r.key} fill={r.colour} />
+            ))}
+          </Bar>
         </BarChart>
       </ResponsiveContainer>
     </div>

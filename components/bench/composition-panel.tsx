@@ -4,9 +4,9 @@ import { useLayoutEffect } from "react";
 import { Card, CardHeader } from "@/components/ui/card";
 import type { CompositionFigures } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
-import { CompositionChart, MIX_PARTS } from "./composition-chart";
+import { CompositionChart } from "./composition-chart";
 import { markPaintAfterCommit } from "./paint-probe";
-import { useThrottled } from "./use-throttled";
+import { useCalmValue } from "./use-calm-value";
 
 const FIGURES = [
   ["totalDryCocoaSolids", "Total dry cocoa solids"],
@@ -21,22 +21,14 @@ const FIGURES = [
 /** What is in the bar, percent of the finished product, with the label's cocoa figure. */
 export function CompositionPanel({ composition }: { composition: CompositionFigures }) {
   useLayoutEffect(() => markPaintAfterCommit(), [composition]);
-  // The figures follow every move at once; the chart (Recharts, several times dearer to redraw)
-  // follows a drag about eight times a second and always lands on the final mix.
-  const charted = useThrottled(composition, 120);
+  // The figures follow every move at once. The chart (a Recharts redraw costs several frames'
+  // worth of script here) follows when the thumb rests, and twice a second during a long drag.
+  const charted = useCalmValue(composition, 150, 500);
   const hasInclusions = Number(composition.inclusions) > 0;
   return (
     <Card data-testid="composition-panel">
       <CardHeader title="Composition" description="Percent of the finished bar." />
       <CompositionChart composition={charted} />
-      <ul className="mt-2 flex flex-wrap gap-x-3 gap-y-1 text-xs text-cocoa-500" aria-hidden>
-        {MIX_PARTS.filter((p) => Number(composition[p.key]) > 0).map((p) => (
-          <li key={p.key} className="flex items-center gap-1">
-            <span className="inline-block size-2.5 rounded-sm" style={{ background: p.colour }} />
-            {p.label}
-          </li>
-        ))}
-      </ul>
       <dl className="mt-4 divide-y divide-sand-light text-sm">
         {FIGURES.map(([key, label]) => (
           <div key={key} className="flex justify-between py-1.5">

@@ -2,6 +2,7 @@
 
 import * as Slider from "@radix-ui/react-slider";
 import { memo, useState, type KeyboardEvent } from "react";
+import { flushSync } from "react-dom";
 import { cn } from "@/lib/cn";
 import { RESOLUTION, RESOLUTION_DECIMALS } from "./bench-state";
 import { markInput } from "./paint-probe";
@@ -71,7 +72,10 @@ export const SliderRow = memo(function SliderRow({ index, name, percent, locked,
         disabled={fixed}
         onValueChange={([v]) => {
           markInput();
-          if (v !== undefined) onPercent(index, v.toFixed(RESOLUTION_DECIMALS));
+          if (v === undefined) return;
+          // A drag's pointer moves come once a frame, just before it is drawn: rendering now (not
+          // in a later task) puts the new figures in that same frame.
+          flushSync(() => onPercent(index, v.toFixed(RESOLUTION_DECIMALS)));
         }}
       >
         <Slider.Track className="relative h-2 grow rounded-full bg-sand-light">
