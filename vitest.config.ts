@@ -1,4 +1,5 @@
 import { defineConfig } from "vitest/config";
+import { BaseSequencer, type TestSpecification } from "vitest/node";
 import react from "@vitejs/plugin-react";
 import { fileURLToPath } from "node:url";
 
@@ -11,6 +12,17 @@ const slotNumber = (() => {
 })();
 const slotPort = (base: number) => base + 100 * slotNumber;
 const slotDir = (base: string) => (slotNumber === 0 ? base : `${base}-slot${slotNumber}`);
+
+/**
+ * Files run in path order, the same every time. The browser tests share one
+ * seeded demo workspace, and some change it (a price-list upload adds a sugar
+ * quote), so a fixed order keeps hand-worked figures reproducible.
+ */
+class PathOrderSequencer extends BaseSequencer {
+  override async sort(files: TestSpecification[]): Promise<TestSpecification[]> {
+    return [...files].sort((a, b) => a.moduleId.localeCompare(b.moduleId));
+  }
+}
 
 /**
  * Three projects, one per kind of test. `npm test` runs them in order through
@@ -26,6 +38,7 @@ export default defineConfig({
     },
   },
   test: {
+    sequence: { sequencer: PathOrderSequencer },
     projects: [
       {
         extends: true,
