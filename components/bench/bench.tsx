@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useCallback, useDeferredValue, useEffect, useLayoutEffect, useMemo, useReducer, useRef, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useReducer, useRef, useState } from "react";
 import { saveRecipeVersionAction } from "@/app/(app)/recipes/[recipeId]/actions";
 import { Card, CardHeader } from "@/components/ui/card";
 import { useToast } from "@/components/ui/toast";
@@ -20,6 +20,7 @@ import { SaveBar } from "./save-bar";
 import type { Fixer } from "./standard-category";
 import { StandardsPanel } from "./standards-panel";
 import { TargetPanel } from "./target-panel";
+import { useAfterPaint } from "./use-after-paint";
 import { useChosenAuthorities } from "./use-chosen-authorities";
 import { clearLocalDraft, readLocalDraft, useLocalDraft, type StoredDraft } from "./use-local-draft";
 
@@ -79,8 +80,8 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
     [state.lines, byId],
   );
   const evaluation = useMemo(() => evaluateRecipe({ lines: engineLines }), [engineLines]);
-  // The standards panel (and its fix search) follows at a lower priority so the sliders stay smooth.
-  const deferredLines = useDeferredValue(engineLines);
+  // The standards panel (and its fix search) follows once the move itself is on screen.
+  const deferredLines = useAfterPaint(engineLines);
   const deferredStandards = useMemo(
     () => (deferredLines === engineLines ? evaluation.standards : evaluateRecipe({ lines: deferredLines }).standards),
     [deferredLines, engineLines, evaluation],
@@ -91,7 +92,7 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
   const used = useMemo(() => new Set(state.lines.map((l) => l.ingredientId)), [state.lines]);
   const addLine = useCallback((id: string) => dispatch({ type: "add-line", ingredientId: id }), []);
   const setBarMass = useCallback((v: string) => dispatch({ type: "set-bar-mass", value: v }), []);
-  const deferredLocked = useDeferredValue(locked);
+  const deferredLocked = useAfterPaint(locked);
   // The target panel reads the lines only when it solves: moving a slider leaves it alone.
   const idKey = state.lines.map((l) => l.ingredientId).join(" ");
   const lineIngredients = useMemo(() => (idKey ? idKey.split(" ") : []).map((id) => toIngredientSpec(byId.get(id)!)), [idKey, byId]);

@@ -27,6 +27,7 @@ export function markInput(): void {
  */
 export function markPaintAfterCommit(): void {
   if (!on()) return;
+  performance.mark("bench:commit");
   requestAnimationFrame(() => {
     const channel = new MessageChannel();
     channel.port1.onmessage = () => performance.mark("bench:paint");

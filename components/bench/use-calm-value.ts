@@ -1,26 +1,17 @@
 "use client";
 
-import { startTransition, useEffect, useRef, useState } from "react";
+import { startTransition, useEffect, useState } from "react";
 
 /**
  * `value` for drawings that cost more than a frame to redraw (the Recharts chart):
- * passed on `wait` ms after it stops changing, and at least every `maxWait` ms
- * while it keeps changing, at a low priority. During a drag the drawing moves a
- * couple of times a second and lands on the final figures as soon as the thumb rests.
+ * passed on, at a low priority, once it has not changed for `wait` ms. While a
+ * thumb moves the drawing waits; it shows the final mix as soon as the thumb rests.
  */
-export function useCalmValue<T>(value: T, wait: number, maxWait: number): T {
+export function useCalmValue<T>(value: T, wait: number): T {
   const [shown, setShown] = useState(value);
-  // When the first change not yet shown happened.
-  const pendingSince = useRef<number | null>(null);
   useEffect(() => {
-    const now = Date.now();
-    pendingSince.current ??= now;
-    const delay = Math.min(wait, Math.max(0, pendingSince.current + maxWait - now));
-    const timer = window.setTimeout(() => {
-      pendingSince.current = null;
-      startTransition(() => setShown(value));
-    }, delay);
+    const timer = window.setTimeout(() => startTransition(() => setShown(value)), wait);
     return () => window.clearTimeout(timer);
-  }, [value, wait, maxWait]);
+  }, [value, wait]);
   return shown;
 }
