@@ -101,6 +101,29 @@ describe("the recipe bench in the browser", () => {
   });
 });
 
+describe("the recipes for production", () => {
+  it("lists released recipes only and opens their released version, never a newer one", async () => {
+    const context = await launchBrowser();
+    try {
+      const joss = DEMO_PEOPLE.find((p) => p.role === "production")!;
+      const page = await signedIn(context, joss.email);
+      await page.goto(`${E2E_BASE_URL}/recipes`);
+      await page.getByRole("link", { name: "House dark 70 %" }).click();
+      await page.waitForURL(/\/recipes\/[0-9a-f-]{36}\/versions\/2$/);
+      expect(await page.getByTestId("version-heading").textContent()).toMatch(/v2\s*released for production/);
+      expect(await page.getByRole("link", { name: "History" }).count()).toBe(0);
+      const recipeUrl = page.url().replace(/\/versions\/2$/, "");
+      await page.goto(recipeUrl); // the bench sends production to the released version
+      await page.waitForURL(/\/versions\/2$/);
+      await page.goto(`${recipeUrl}/versions/3`); // v3 exists but is not released
+      await page.getByRole("heading", { name: "That recipe or version is not here" }).waitFor();
+      expect(await page.getByTestId("version-heading").count()).toBe(0);
+    } finally {
+      await context.close();
+    }
+  });
+});
+
 /** The line's ingredient id, read from the comparison's row (rows are keyed by ingredient). */
 async function ingredientIdOf(page: Page, name: string): Promise<string> {
   const row = page.locator('[data-testid^="diff-"]').filter({ hasText: name }).first();
