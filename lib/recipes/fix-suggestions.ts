@@ -48,15 +48,21 @@ function candidatesFor(lines: RecipeLine[], check: StandardCheck, locked: readon
   return out.sort((x, y) => x.size.cmp(y.size));
 }
 
-function categoryAfter(lines: RecipeLine[], percents: string[], result: StandardResult): StandardResult | undefined {
+/** After the change: does the category pass, and how far did the cocoa figure (the label's headline) move? */
+function after(lines: RecipeLine[], percents: string[], result: StandardResult, cocoaBefore: Decimal): { pass: boolean; cocoaShift: Decimal } {
   const moved = lines.map((line, i) => ({ ...line, percent: percents[i]! }));
-  return evaluateRecipe({ lines: moved }, { authorities: [result.authority] }).standards.find((s) => s.category === result.category);
+  const e = evaluateRecipe({ lines: moved }, { authorities: [result.authority] });
+  return {
+    pass: e.standards.find((s) => s.category === result.category)?.pass ?? false,
+    cocoaShift: new Decimal(e.composition.totalDryCocoaSolids).minus(cocoaBefore).abs(),
+  };
 }
 
 /**
- * The smallest two-line change (solveForTarget: one line up, one down) that meets
- * each failing limit of a category, preferring one after which the whole
- * category passes. Locked lines never move. Pure; cost grows with lines².
+ * The smallest two-line change (solveForTarget: one line up, one down) after
+ * which the whole category passes (among equals, the one that moves the total
+ * dry cocoa solids least); failing that, the smallest change that meets one of
+ * its failing limits. Locked lines never move. Pure; cost grows with lines².
  */
 export function suggestFix(
   lines: RecipeLine[],
@@ -75,13 +81,16 @@ export function suggestFix(
     return { ok: false, reason: "No change of two unlocked lines meets it: unlock a line or add an ingredient that carries what is missing." };
   }
   candidates.sort((x, y) => x.size.cmp(y.size));
-  let fallback: Candidate | undefined;
+  // Among equally small changes that pass, the one that moves the cocoa figure least.
+  const cocoaBefore = new Decimal(evaluateRecipe({ lines }, { authorities: [] }).composition.totalDryCocoaSolids);
+  let best: { candidate: Candidate; cocoaShift: Decimal } | undefined;
   for (const candidate of candidates.slice(0, VERIFIED_CANDIDATES)) {
-    const after = categoryAfter(lines, candidate.percents, result);
-    if (after?.pass) return { ok: true, fix: describe(lines, candidate, true) };
-    fallback ??= candidate;
+    if (best && candidate.size.gt(best.candidate.size)) break;
+    const checked = after(lines, candidate.percents, result, cocoaBefore);
+    if (checked.pass && (!best || checked.cocoaShift.lt(best.cocoaShift))) best = { candidate, cocoaShift: checked.cocoaShift };
   }
-  return { ok: true, fix: describe(lines, fallback ?? candidates[0]!, false) };
+  if (best) return { ok: true, fix: describe(lines, best.candidate, true) };
+  return { ok: true, fix: describe(lines, candidates[0]!, false) };
 }
 
 function describe(lines: RecipeLine[], c: Candidate, categoryPasses: boolean): FixSuggestion {
