@@ -15,7 +15,7 @@ export const AddLine = memo(function AddLine({ library, used, onAdd }: { library
       <div className="min-w-0 flex-1">
         <Select
           ariaLabel="Ingredient to add"
-          value={chosen || undefined}
+          value={chosen}
           onValueChange={setChoice}
           options={options}
           placeholder={options.length ? "Add an ingredient from the library…" : "Every library ingredient is in the recipe"}

@@ -31,7 +31,7 @@ export function RecipeHeader({ recipe, current, readsAll, actions }: { recipe: R
           <p className="mt-2 flex flex-wrap items-center gap-2 text-sm text-cocoa-700">
             <Badge className="capitalize">{recipe.chocolateType}</Badge>
             {recipe.targetCocoaPercent ? <span>target {pct(recipe.targetCocoaPercent, 0)} cocoa</span> : null}
-            {readsAll ? <span>· latest {recipe.latestVersionNo ? `v${recipe.latestVersionNo}` : "none yet"}</span> : null}
+            {readsAll ? <span>· {recipe.latestVersionNo ? `latest v${recipe.latestVersionNo}` : "no version saved yet"}</span> : null}
             {recipe.releasedVersionNo ? <Badge tone="meets">released v{recipe.releasedVersionNo}</Badge> : <span>· not released</span>}
           </p>
           {recipe.notes ? <p className="mt-2 max-w-2xl whitespace-pre-line text-sm text-cocoa-700">{recipe.notes}</p> : null}
