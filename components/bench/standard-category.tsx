@@ -3,9 +3,10 @@
 import { memo, useMemo, useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
-import type { StandardCheck, StandardResult } from "@/lib/formulation";
+import type { StandardResult } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
 import type { FixOutcome } from "@/lib/recipes/fix-suggestions";
+import { gap, verdict } from "@/lib/recipes/verdict";
 
 /** Whatever the bench lends the standards panel to suggest and apply a fix. */
 export type Fixer = {
@@ -13,14 +14,6 @@ export type Fixer = {
   apply: (percents: string[]) => void;
   lineName: (index: number) => string;
 };
-
-/** "short by 2.3 %", "over by 0.4 %", with two decimals when one would show 0.0. */
-export function gap(check: StandardCheck): string {
-  const amount = check.shortBy ?? check.overBy ?? "0";
-  const decimals = Number(amount) > 0 && Number(amount) < 0.05 ? 2 : 1;
-  if (check.overBy === "0") return "at the maximum, which it must stay below";
-  return `${check.shortBy !== undefined ? "short by" : "over by"} ${pct(amount, decimals)}`;
-}
 
 function FixSuggestionView({ outcome, fixer }: { outcome: FixOutcome; fixer: Fixer }) {
   if (!outcome.ok) return <p className="text-sm text-cocoa-500">{outcome.reason}</p>;
@@ -48,7 +41,7 @@ function Header({ result }: { result: StandardResult }) {
         <p className="font-semibold first-letter:uppercase">{result.category}</p>
         <p className="text-xs text-cocoa-500">{result.reference}</p>
       </div>
-      <Badge tone={result.pass ? "meets" : "short"}>{result.pass ? "meets" : "does not meet"}</Badge>
+      <Badge tone={result.pass ? "meets" : "short"}>{verdict(result)}</Badge>
     </div>
   );
 }

@@ -9,6 +9,7 @@ import { getBaseCurrency } from "@/lib/data/exchange-rates";
 import { getVersion, listVersionNumbers } from "@/lib/data/recipes-versions";
 import { diffComposition, diffCost, diffLines } from "@/lib/recipes/diff";
 import { money, pct } from "@/lib/recipes/format";
+import { verdict } from "@/lib/recipes/verdict";
 import { versionNoSchema } from "@/lib/validation/recipes";
 import { loadRecipePage, orNotFound } from "../load";
 
@@ -72,8 +73,8 @@ export default async function ComparePage({
                       {s.authority} {s.category}
                     </span>
                     <span className="flex gap-2">
-                      <Badge tone={s.pass ? "meets" : "short"}>{la}: {s.pass ? "meets" : "does not meet"}</Badge>
-                      <Badge tone={other!.pass ? "meets" : "short"}>{lb}: {other!.pass ? "meets" : "does not meet"}</Badge>
+                      <Badge tone={s.pass ? "meets" : "short"}>{la}: {verdict(s)}</Badge>
+                      <Badge tone={other!.pass ? "meets" : "short"}>{lb}: {verdict(other!)}</Badge>
                     </span>
                   </li>
                 ))}
