@@ -66,6 +66,10 @@ export const saveVersionSchema = z
   .strict();
 export type SaveVersionInput = z.infer<typeof saveVersionSchema>;
 
+/** The body of POST /api/recipes/:recipeId/versions: a save without the recipe id (it is in the path). */
+export const saveVersionBodySchema = saveVersionSchema.omit({ recipeId: true }).strict();
+export type SaveVersionBody = z.infer<typeof saveVersionBodySchema>;
+
 export const recipeStarts = ["scratch", "starting_point", "copy"] as const;
 
 export const createRecipeSchema = z
