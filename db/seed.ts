@@ -12,6 +12,7 @@ import { seedIngredients } from "./demo/ingredients";
 import { seedRecipes } from "./demo/recipes";
 import { seedLabels } from "./demo/labels";
 import { seedLots } from "./demo/lots";
+import { seedLotFiles } from "./demo/lot-files";
 import { seedCosting } from "./demo/costing";
 import * as schema from "./schema";
 import { memberships, users, workspaces, type Role } from "./schema";
@@ -33,7 +34,7 @@ type Database = NodePgDatabase<typeof schema>;
  * Each feature's demo data, in dependency order (ingredients before recipes…).
  * Every seeder is idempotent.
  */
-const featureSeeders: DemoSeeder[] = [seedIngredients, seedRecipes, seedLabels, seedLots, seedBatches, seedCosting];
+const featureSeeders: DemoSeeder[] = [seedIngredients, seedRecipes, seedLabels, seedLots, seedLotFiles, seedBatches, seedCosting];
 
 export async function seedDemo(db: Database): Promise<{ workspaceId: string }> {
   return db.transaction(async (tx) => {

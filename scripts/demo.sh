@@ -12,6 +12,19 @@ fi
 
 scripts/db.sh start
 npx tsx scripts/migrate.ts
+# Spec sheets and certificates go to a local S3-compatible server (s3rver) on loopback;
+# it starts first because the demo seed stores a sample certificate there.
+export BARWRIGHT_S3_PORT=${BARWRIGHT_S3_PORT:-4568}
+export BARWRIGHT_S3_ENDPOINT="http://127.0.0.1:$BARWRIGHT_S3_PORT"
+export BARWRIGHT_S3_DIR=${BARWRIGHT_S3_DIR:-$PWD/.data/s3}
+node --import tsx scripts/fake-s3.ts &
+S3=$!
+trap 'kill $S3 2>/dev/null' EXIT
+for _ in $(seq 1 50); do
+  (exec 3<>"/dev/tcp/127.0.0.1/$BARWRIGHT_S3_PORT") 2>/dev/null && break
+  kill -0 $S3 2>/dev/null || { echo "demo: the file store did not start (see above)." >&2; exit 1; }
+  sleep 0.2
+done
 npx tsx scripts/seed.ts
 echo "demo: building the production app…"
 node node_modules/next/dist/bin/next build >.data/build.log 2>&1 || { tail -n 40 .data/build.log >&2; echo "demo: the build failed (full log: .data/build.log)." >&2; exit 1; }
@@ -22,21 +35,10 @@ export BARWRIGHT_MAILBOX_DIR=${BARWRIGHT_MAILBOX_DIR:-$PWD/.data/mailbox}
 export BARWRIGHT_DEMO_MAILBOX=1
 node --import tsx scripts/mail-sink.ts &
 SINK=$!
-# Spec sheets and certificates go to a local S3-compatible server (s3rver) on loopback.
-export BARWRIGHT_S3_PORT=${BARWRIGHT_S3_PORT:-4568}
-export BARWRIGHT_S3_ENDPOINT="http://127.0.0.1:$BARWRIGHT_S3_PORT"
-export BARWRIGHT_S3_DIR=${BARWRIGHT_S3_DIR:-$PWD/.data/s3}
-node --import tsx scripts/fake-s3.ts &
-S3=$!
 trap 'kill $SINK $S3 2>/dev/null' EXIT
 for _ in $(seq 1 50); do
   (exec 3<>"/dev/tcp/127.0.0.1/$BARWRIGHT_SMTP_PORT") 2>/dev/null && break
   kill -0 $SINK 2>/dev/null || { echo "demo: the mail sink did not start (see above)." >&2; exit 1; }
-  sleep 0.2
-done
-for _ in $(seq 1 50); do
-  (exec 3<>"/dev/tcp/127.0.0.1/$BARWRIGHT_S3_PORT") 2>/dev/null && break
-  kill -0 $S3 2>/dev/null || { echo "demo: the file store did not start (see above)." >&2; exit 1; }
   sleep 0.2
 done
 

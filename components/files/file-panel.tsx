@@ -8,8 +8,14 @@ import { Select } from "@/components/ui/select";
 import type { AttachmentRecord } from "@/lib/data/attachments";
 import { formatDate } from "@/lib/format";
 
-const KIND_LABEL = { spec_sheet: "Spec sheet", certificate: "Certificate", other: "Other" } as const;
-const kindOptions = Object.entries(KIND_LABEL).map(([value, label]) => ({ value, label }));
+const KIND_LABEL = { spec_sheet: "Spec sheet", certificate: "Certificate", lab_report: "Lab report", other: "Other" } as const;
+type Kind = keyof typeof KIND_LABEL;
+// A bean lot has no spec sheet; ingredients and suppliers keep their three kinds.
+const KINDS_OF: Record<"ingredients" | "suppliers" | "lots", Kind[]> = {
+  ingredients: ["spec_sheet", "certificate", "other"],
+  suppliers: ["spec_sheet", "certificate", "other"],
+  lots: ["certificate", "lab_report", "other"],
+};
 const size = (n: number) => (n >= 1024 * 1024 ? `${(n / (1024 * 1024)).toFixed(1)} MB` : `${Math.max(1, Math.round(n / 1024))} KB`);
 
 async function send(url: string, init: RequestInit): Promise<string | null> {
@@ -20,15 +26,18 @@ async function send(url: string, init: RequestInit): Promise<string | null> {
 }
 
 /**
- * Spec sheets and certificates of one ingredient or supplier: list, download
+ * Spec sheets, certificates and lab reports of one ingredient, supplier or
+ * bean lot: list, download
  * (members only, through /api/files), attach (PDF, PNG, JPEG up to 10 MB,
  * checked by content on the server) and remove.
  */
-export function FilePanel({ owner, canEdit }: { owner: { kind: "ingredients" | "suppliers"; id: string }; canEdit: boolean }) {
+export function FilePanel({ owner, canEdit }: { owner: { kind: "ingredients" | "suppliers" | "lots"; id: string }; canEdit: boolean }) {
   const key = `/api/${owner.kind}/${owner.id}/files`;
+  const kinds = KINDS_OF[owner.kind];
+  const kindOptions = kinds.map((value) => ({ value, label: KIND_LABEL[value] }));
   const { data, error, mutate } = useSWR(key, fetchJson<{ files: AttachmentRecord[] }>);
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
-  const [kind, setKind] = useState("spec_sheet");
+  const [kind, setKind] = useState<string>(kinds[0]!);
   const [pending, start] = useTransition();
   const input = useRef<HTMLInputElement>(null);
 

@@ -2,12 +2,12 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { attachments, ingredients, suppliers, users, type AttachmentKind } from "@/db/schema";
+import { attachments, beanLots, ingredients, suppliers, users, type AttachmentKind } from "@/db/schema";
 import { invalid, notFound } from "@/lib/errors";
 import { checkUpload, cleanFileName } from "@/lib/files/check-upload";
 import { deleteObject, putObject } from "@/lib/storage/s3";
 
-export type AttachmentOwner = { ingredientId: string } | { supplierId: string };
+export type AttachmentOwner = { ingredientId: string } | { supplierId: string } | { lotId: string };
 
 export type AttachmentRecord = {
   id: string;
@@ -20,11 +20,17 @@ export type AttachmentRecord = {
 };
 
 const ownerFilter = (owner: AttachmentOwner) =>
-  "ingredientId" in owner ? eq(attachments.ingredientId, owner.ingredientId) : eq(attachments.supplierId, owner.supplierId);
+  "ingredientId" in owner
+    ? eq(attachments.ingredientId, owner.ingredientId)
+    : "supplierId" in owner
+      ? eq(attachments.supplierId, owner.supplierId)
+      : eq(attachments.lotId, owner.lotId);
 
-/** The files of one ingredient or supplier, newest first. */
+const ownerName = (owner: AttachmentOwner) => ("ingredientId" in owner ? "That ingredient" : "supplierId" in owner ? "That supplier" : "That lot");
+
+/** The files of one ingredient, supplier or bean lot, newest first. */
 export async function listAttachments({ workspaceId, owner }: { workspaceId: string; owner: AttachmentOwner }): Promise<AttachmentRecord[]> {
-  if (!(await ownerExists(workspaceId, owner))) throw notFound("ingredientId" in owner ? "That ingredient" : "That supplier");
+  if (!(await ownerExists(workspaceId, owner))) throw notFound(ownerName(owner));
   const rows = await db
     .select({
       id: attachments.id,
@@ -46,12 +52,14 @@ async function ownerExists(workspaceId: string, owner: AttachmentOwner): Promise
   const rows =
     "ingredientId" in owner
       ? await db.select({ id: ingredients.id }).from(ingredients).where(and(eq(ingredients.workspaceId, workspaceId), eq(ingredients.id, owner.ingredientId)))
-      : await db.select({ id: suppliers.id }).from(suppliers).where(and(eq(suppliers.workspaceId, workspaceId), eq(suppliers.id, owner.supplierId)));
+      : "supplierId" in owner
+        ? await db.select({ id: suppliers.id }).from(suppliers).where(and(eq(suppliers.workspaceId, workspaceId), eq(suppliers.id, owner.supplierId)))
+        : await db.select({ id: beanLots.id }).from(beanLots).where(and(eq(beanLots.workspaceId, workspaceId), eq(beanLots.id, owner.lotId)));
   return rows.length > 0;
 }
 
 /**
- * Stores an uploaded file for an ingredient or a supplier: its type and size are
+ * Stores an uploaded file for an ingredient, a supplier or a bean lot: its type and size are
  * checked on its bytes (checkUpload), it goes to object storage under a key we
  * generate, then its row is written. If the row cannot be written, the stored
  * object is removed again so nothing is left half-saved.
@@ -71,7 +79,7 @@ export async function addAttachment({
   fileName: string;
   bytes: Uint8Array;
 }): Promise<AttachmentRecord> {
-  if (!(await ownerExists(workspaceId, owner))) throw notFound("ingredientId" in owner ? "That ingredient" : "That supplier");
+  if (!(await ownerExists(workspaceId, owner))) throw notFound(ownerName(owner));
   const check = await checkUpload(bytes);
   if (!check.ok) throw invalid(check.reason, { file: [check.reason] });
   const key = `workspaces/${workspaceId}/files/${randomUUID()}.${check.extension}`;
@@ -115,7 +123,7 @@ export async function getAttachment({ workspaceId, attachmentId }: { workspaceId
   return row;
 }
 
-/** Removes a file of one ingredient or supplier: its row, then its stored object. */
+/** Removes a file of one ingredient, supplier or lot: its row, then its stored object. */
 export async function deleteAttachment({
   workspaceId,
   owner,

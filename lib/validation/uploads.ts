@@ -8,7 +8,15 @@ const fileSchema = z.instanceof(File, { message: "Choose a file to upload." });
 export const attachmentUploadSchema = z
   .object({
     file: fileSchema,
-    kind: z.enum(attachmentKinds, "Choose spec sheet, certificate or other.").optional().default("spec_sheet"),
+    kind: z.enum(attachmentKinds, "Choose spec sheet, certificate, lab report or other.").optional().default("spec_sheet"),
+  })
+  .strict();
+
+/** A bean lot's file: a certificate (origin, organic…), a lab report or other; no spec sheets. */
+export const lotFileUploadSchema = z
+  .object({
+    file: fileSchema,
+    kind: z.enum(["certificate", "lab_report", "other"], "Choose certificate, lab report or other.").optional().default("certificate"),
   })
   .strict();
 

@@ -14,21 +14,22 @@ export default async function setup() {
   dbScript("e2e", "destroy");
   dbScript("e2e", "start");
   migrateCluster("e2e");
-  execFileSync("npx", ["tsx", "scripts/seed.ts"], { env: clusterEnv("e2e"), stdio: "inherit" });
-  rmSync(mailSinks.e2e.dir, { recursive: true, force: true });
-  const sink = await startMailSink(mailSinks.e2e);
+  // Object storage first: the demo seed stores its sample certificate there.
   rmSync(fakeS3s.e2e.dir, { recursive: true, force: true });
   const s3 = await startFakeS3(fakeS3s.e2e);
+  const storage = { BARWRIGHT_S3_ENDPOINT: `http://127.0.0.1:${fakeS3s.e2e.port}`, BARWRIGHT_S3_BUCKET: fakeS3s.e2e.bucket };
+  execFileSync("npx", ["tsx", "scripts/seed.ts"], { env: { ...clusterEnv("e2e"), ...storage }, stdio: "inherit" });
+  rmSync(mailSinks.e2e.dir, { recursive: true, force: true });
+  const sink = await startMailSink(mailSinks.e2e);
   const env = {
     ...clusterEnv("e2e"),
+    ...storage,
     DATABASE_URL: clusterUrl("e2e"),
     NEXT_TELEMETRY_DISABLED: "1",
     BARWRIGHT_SMTP_URL: `smtp://127.0.0.1:${mailSinks.e2e.port}`,
     BARWRIGHT_MAILBOX_DIR: path.resolve(mailSinks.e2e.dir),
     BARWRIGHT_DEMO_MAILBOX: "1",
     BARWRIGHT_DIST_DIR: E2E_DIST_DIR,
-    BARWRIGHT_S3_ENDPOINT: `http://127.0.0.1:${fakeS3s.e2e.port}`,
-    BARWRIGHT_S3_BUCKET: fakeS3s.e2e.bucket,
   };
   if (process.env.BARWRIGHT_E2E_SKIP_BUILD !== "1") {
     console.log("e2e: building the production app…");

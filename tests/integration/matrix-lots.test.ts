@@ -1,3 +1,6 @@
+import { GET as downloadFile } from "@/app/api/files/[fileId]/route";
+import { DELETE as deleteLotFile } from "@/app/api/lots/[lotId]/files/[fileId]/route";
+import { GET as listLotFiles, POST as uploadLotFile } from "@/app/api/lots/[lotId]/files/route";
 import { GET as getLot } from "@/app/api/lots/[lotId]/route";
 import { GET as getLots } from "@/app/api/lots/route";
 import {
@@ -7,8 +10,19 @@ import {
   recordCutTestAction,
   recordProcessingAction,
 } from "@/app/(app)/lots/actions";
+import { addAttachment } from "@/lib/data/attachments";
+import type { TeamFixture } from "../support/fixtures";
+import { tinyPdf } from "../support/files";
+import { formRequest } from "../support/ingredients";
 import { createTestLot, newKey } from "../support/lots";
-import { base, form, fromResult, fromStatus, params, runMatrix, type MatrixRow } from "../support/matrix";
+import { base, form, fromResult, fromStatus, jsonRequest, params, runMatrix, type MatrixRow } from "../support/matrix";
+
+/** A lot with one stored certificate, put there by the team's owner. */
+async function lotWithFile(team: TeamFixture) {
+  const lot = await createTestLot(team.workspaceId);
+  const file = await addAttachment({ workspaceId: team.workspaceId, userId: team.people.owner.id, owner: { lotId: lot.id }, kind: "certificate", fileName: "origin.pdf", bytes: tinyPdf() });
+  return { lotId: lot.id, fileId: file.id };
+}
 
 const rows: MatrixRow[] = [
   {
@@ -79,6 +93,43 @@ const rows: MatrixRow[] = [
     run: async ({ team }) => {
       const lot = await createTestLot(team.workspaceId);
       return fromStatus((await getLot(new Request(`${base}/api/lots/${lot.id}`), params({ lotId: lot.id }))).status);
+    },
+  },
+  {
+    name: "GET /api/lots/:lotId/files",
+    permission: "lots.read",
+    outsider: "not_found",
+    run: async ({ team }) => {
+      const { lotId } = await lotWithFile(team);
+      return fromStatus((await listLotFiles(new Request(`${base}/api/lots/${lotId}/files`), params({ lotId }))).status);
+    },
+  },
+  {
+    name: "POST /api/lots/:lotId/files",
+    permission: "lots.edit",
+    outsider: "not_found",
+    run: async ({ team }) => {
+      const lot = await createTestLot(team.workspaceId);
+      const req = formRequest(`/api/lots/${lot.id}/files`, { file: new File([new Uint8Array(tinyPdf())], "organic.pdf"), kind: "certificate" });
+      return fromStatus((await uploadLotFile(req, params({ lotId: lot.id }))).status);
+    },
+  },
+  {
+    name: "DELETE /api/lots/:lotId/files/:fileId",
+    permission: "lots.edit",
+    outsider: "not_found",
+    run: async ({ team }) => {
+      const { lotId, fileId } = await lotWithFile(team);
+      return fromStatus((await deleteLotFile(jsonRequest("DELETE", `/api/lots/${lotId}/files/${fileId}`), params({ lotId, fileId }))).status);
+    },
+  },
+  {
+    name: "GET /api/files/:fileId (a lot's file)",
+    permission: "lots.read",
+    outsider: "not_found",
+    run: async ({ team }) => {
+      const { fileId } = await lotWithFile(team);
+      return fromStatus((await downloadFile(new Request(`${base}/api/files/${fileId}`), params({ fileId }))).status);
     },
   },
 ];
