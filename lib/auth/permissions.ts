@@ -15,6 +15,10 @@ export const permissionTable = {
   "account.manage": everyone,
   /** Invite, revoke invitations, change roles, remove members, read the demo mailbox. */
   "members.manage": ["owner"],
+  /** Download the whole workspace as one file (every table, people without passwords, files). */
+  "workspace.export": ["owner"],
+  /** Make a new workspace from an export file (the importer becomes its owner). */
+  "workspace.import": ["owner"],
 
   /** Read the ingredient library, suppliers, quotes and rates. */
   "ingredients.read": everyone,

@@ -21,6 +21,8 @@ export const expectedRights: Record<Permission, Role[]> = {
   "workspace.read": everyone,
   "account.manage": everyone,
   "members.manage": ["owner"],
+  "workspace.export": ["owner"],
+  "workspace.import": ["owner"],
   "ingredients.read": everyone,
   "ingredients.edit": ["owner", "formulator"],
   "suppliers.edit": ["owner", "buyer"],
