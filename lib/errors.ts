@@ -41,10 +41,21 @@ export const conflict = (message: string) => new AppError("conflict", message);
 export const invalid = (message: string, fieldErrors?: Record<string, string[] | undefined>) =>
   new AppError("invalid", message, fieldErrors);
 
-/** True for errors pg raises when the server cannot be reached. */
+/**
+ * True for errors pg raises when the server cannot be reached, has gone away or
+ * stopped answering in time. Drizzle wraps driver errors (`cause`), so the
+ * chain is followed a few levels.
+ */
 export function isDatabaseUnavailable(err: unknown): boolean {
-  const e = err as { code?: string; message?: string } | null;
-  if (!e) return false;
-  if (e.code && ["ECONNREFUSED", "ECONNRESET", "57P01", "57P03", "08006", "08001"].includes(e.code)) return true;
-  return /connection terminated|timeout exceeded when trying to connect|Connection terminated/i.test(e.message ?? "");
+  for (let e = err as { code?: unknown; message?: unknown; cause?: unknown } | null, depth = 0; e && depth < 5; depth++) {
+    if (typeof e.code === "string" && UNAVAILABLE_CODES.includes(e.code)) return true;
+    if (typeof e.message === "string" && UNAVAILABLE_MESSAGE.test(e.message)) return true;
+    e = (e.cause ?? null) as typeof e;
+  }
+  return false;
 }
+
+// Socket errors, then SQLSTATEs: 57P01-57P03 admin/crash shutdown and cannot connect now,
+// 57014 statement timeout, 08xxx connection exceptions, 53300 too many connections.
+const UNAVAILABLE_CODES = ["ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT", "57P01", "57P02", "57P03", "57014", "08000", "08003", "08006", "08001", "08004", "53300"];
+const UNAVAILABLE_MESSAGE = /connection terminated|timeout exceeded when trying to connect|query read timeout|not queryable|connection ended/i;

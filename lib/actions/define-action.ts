@@ -5,6 +5,7 @@ import { authorize } from "@/lib/auth/authorize";
 import type { Viewer } from "@/lib/auth/current";
 import type { Permission } from "@/lib/auth/permissions";
 import { AppError, isDatabaseUnavailable, type ErrorCode } from "@/lib/errors";
+import { unsafeInputProblem } from "@/lib/validation/safe-input";
 import { formToObject } from "./result";
 
 export type ActionResult<T = void> =
@@ -28,6 +29,8 @@ export function defineAction<S extends z.ZodType, T>(opts: {
     try {
       // Authorise before parsing so a signed-out caller learns nothing about the schema.
       const viewer = await authorize(opts.permission);
+      const problem = unsafeInputProblem(raw);
+      if (problem) return { ok: false, code: "invalid", message: problem, fieldErrors: { _form: [problem] } };
       const parsed = opts.schema.safeParse(raw);
       if (!parsed.success) {
         return {
@@ -54,7 +57,10 @@ export function definePublicAction<S extends z.ZodType, T>(opts: {
 }): (prev: unknown, formData: FormData) => Promise<ActionResult<T>> {
   return async (_prev, formData) => {
     try {
-      const parsed = opts.schema.safeParse(formToObject(formData));
+      const raw = formData instanceof FormData ? formToObject(formData) : formData;
+      const problem = unsafeInputProblem(raw);
+      if (problem) return { ok: false, code: "invalid", message: problem, fieldErrors: { _form: [problem] } };
+      const parsed = opts.schema.safeParse(raw);
       if (!parsed.success) {
         return { ok: false, code: "invalid", message: "Check the highlighted fields.", fieldErrors: fieldErrorsOf(parsed.error) };
       }

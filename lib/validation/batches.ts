@@ -1,7 +1,6 @@
-import Decimal from "decimal.js";
 import { z } from "zod";
 import { batchMassUnits } from "@/db/schema/batches";
-import { decimalText, isoDaySchema, optionalDecimalText, optionalText } from "./decimal";
+import { decimalOrNull, decimalText, isoDaySchema, optionalDecimalText, optionalText } from "./decimal";
 
 const id = (message: string) => z.string().uuid(message);
 const optionalId = (message: string) =>
@@ -23,10 +22,12 @@ const sizeFields = {
 };
 
 function sizeRules(v: { amount: string; unit: (typeof batchMassUnits)[number] }, ctx: z.RefinementCtx) {
-  if (new Decimal(v.amount).gt(maxAmount[v.unit])) {
+  const amount = decimalOrNull(v.amount);
+  if (amount === null || !Object.hasOwn(maxAmount, v.unit)) return; // the fields' own messages say what is wrong
+  if (amount.gt(maxAmount[v.unit])) {
     ctx.addIssue({ code: "custom", path: ["amount"], message: `At most ${maxAmount[v.unit]} ${v.unit} in one batch (1,000 t).` });
   }
-  if (v.unit === "bars" && !new Decimal(v.amount).isInteger()) {
+  if (v.unit === "bars" && !amount.isInteger()) {
     ctx.addIssue({ code: "custom", path: ["amount"], message: "A number of bars is a whole number." });
   }
 }

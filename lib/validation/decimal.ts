@@ -24,6 +24,18 @@ export function decimalText(opts: { label: string; max: string; decimals: number
     .transform((text) => new Decimal(text).toFixed());
 }
 
+/**
+ * The value as a Decimal, or null when it is not a plain decimal. For refine
+ * callbacks: zod 4 runs a refinement even after the field's own check failed
+ * (checks continue by default), so the callback can receive "NaN", an array or
+ * a 10 MB string, and `new Decimal(…)` would throw (a 500) instead of letting
+ * the field's own message through.
+ */
+export function decimalOrNull(v: unknown): Decimal | null {
+  if (typeof v === "number" && Number.isFinite(v)) return new Decimal(v);
+  return typeof v === "string" && v.length <= 40 && /^-?\d+(\.\d+)?$/.test(v.trim()) ? new Decimal(v.trim()) : null;
+}
+
 /** The same, but an empty field means "not given" (null). */
 export function optionalDecimalText(opts: Parameters<typeof decimalText>[0]) {
   return z.preprocess(

@@ -3,7 +3,7 @@ import { z } from "zod";
 import { ingredientKinds } from "@/db/schema/ingredients";
 import { allergenCodes } from "@/lib/ingredients/allergens";
 import { COMPOSITION_FIELDS, NUTRIENT_FIELDS } from "@/lib/ingredients/kinds";
-import { checkboxSchema, decimalText, optionalDecimalText, optionalText } from "./decimal";
+import { checkboxSchema, decimalOrNull, decimalText, optionalDecimalText, optionalText } from "./decimal";
 
 const idSchema = z.string().uuid("Unknown item.");
 
@@ -44,7 +44,8 @@ const ingredientFields = z
 
 /** Composition fields are g per 100 g: together they cannot exceed 100 g (the rest is "other"). */
 function compositionFits(value: Record<string, unknown>, ctx: z.RefinementCtx) {
-  const sum = COMPOSITION_FIELDS.reduce((acc, f) => acc.plus(new Decimal(String(value[f.key] ?? "0"))), new Decimal(0));
+  // A field that is not a decimal has its own message; it adds nothing here.
+  const sum = COMPOSITION_FIELDS.reduce((acc, f) => acc.plus(decimalOrNull(value[f.key]) ?? 0), new Decimal(0));
   if (sum.gt(100)) {
     ctx.addIssue({
       code: "custom",

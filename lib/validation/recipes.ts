@@ -1,6 +1,7 @@
 import Decimal from "decimal.js";
 import { z } from "zod";
 import { chocolateTypes } from "@/db/schema/recipes";
+import { decimalOrNull } from "./decimal";
 
 /** A decimal typed or sent as a string or a number, kept as a plain string. */
 const decimalText = (message: string) =>
@@ -10,12 +11,15 @@ const decimalText = (message: string) =>
     .pipe(z.string().regex(/^\d{1,7}(\.\d{1,4})?$/, message));
 
 export const percentSchema = decimalText("Enter a percent like 64 or 64.5 (up to 4 decimals).").refine(
-  (v) => new Decimal(v).lte(100),
+  (v) => decimalOrNull(v)?.lte(100) ?? true, // the format message already says what is wrong
   "A percent cannot be above 100.",
 );
 
 export const barMassSchema = decimalText("Enter the bar mass in grams, like 70.").refine(
-  (v) => new Decimal(v).gt(0) && new Decimal(v).lte(10_000) && new Decimal(v).decimalPlaces() <= 2,
+  (v) => {
+    const d = decimalOrNull(v);
+    return d === null || (d.gt(0) && d.lte(10_000) && d.decimalPlaces() <= 2); // null: the format message already says what is wrong
+  },
   "The bar mass must be above 0 g and at most 10,000 g, with at most 2 decimals.",
 );
 
@@ -50,7 +54,9 @@ export const recipeLinesSchema = z
       if (seen.has(line.ingredientId)) ctx.addIssue({ code: "custom", message: "Each ingredient can appear only once." });
       seen.add(line.ingredientId);
     }
-    const total = lines.reduce((sum, l) => sum.plus(new Decimal(l.percent)), new Decimal(0));
+    const percents = lines.map((l) => decimalOrNull(l.percent));
+    if (percents.some((p) => p === null)) return; // each bad line has its own message
+    const total = percents.reduce<Decimal>((sum, p) => sum.plus(p!), new Decimal(0));
     if (!total.eq(100)) ctx.addIssue({ code: "custom", message: `The lines add up to ${total.toFixed()} %; they must add up to exactly 100 %.` });
   });
 
@@ -136,7 +142,7 @@ export type RecipeListQuery = z.infer<typeof recipeListQuerySchema>;
 /** "latest", "released" or a version number. */
 export const versionRefSchema = z.union([z.enum(["latest", "released"]), versionNoSchema]);
 
-const compositionField = decimalText("Use a figure in g per 100 g, like 55 or 43.5.").refine((v) => new Decimal(v).lte(100), "At most 100 g per 100 g.");
+const compositionField = decimalText("Use a figure in g per 100 g, like 55 or 43.5.").refine((v) => decimalOrNull(v)?.lte(100) ?? true, "At most 100 g per 100 g.");
 
 const inlineIngredientSchema = z
   .object({
