@@ -8,6 +8,7 @@ import { useToast } from "@/components/ui/toast";
 import { costRecipe, evaluateRecipe, type RecipeLine } from "@/lib/formulation";
 import { toIngredientSpec } from "@/lib/recipes/engine-lines";
 import { suggestFix } from "@/lib/recipes/fix-suggestions";
+import type { LotPriceSource } from "@/lib/recipes/lot-prices";
 import type { BenchIngredient, ChocolateType, Draft } from "@/lib/recipes/types";
 import { AddLine } from "./add-line";
 import { benchReducer, initialBench, RESOLUTION, sameDraft, tidy } from "./bench-state";
@@ -20,6 +21,7 @@ import { SaveBar } from "./save-bar";
 import type { Fixer } from "./standard-category";
 import { StandardsPanel } from "./standards-panel";
 import { TargetPanel } from "./target-panel";
+import { LeastCostPanel } from "@/components/least-cost/least-cost-panel";
 import { useAfterPaint } from "./use-after-paint";
 import { useChosenAuthorities } from "./use-chosen-authorities";
 import { clearLocalDraft, readLocalDraft, useLocalDraft, type StoredDraft } from "./use-local-draft";
@@ -31,6 +33,10 @@ export type BenchProps = {
   library: BenchIngredient[];
   currency: string;
   canEdit: boolean;
+  /** False for a viewer who may not see costs: no cost panel (and the library comes without prices). */
+  showCosts: boolean;
+  /** Bean lots whose nibs can price a nibs or cocoa liquor line instead of the preferred quote. */
+  lotSources?: LotPriceSource[];
 };
 
 function myCostPerBar(lines: RecipeLine[], barMassGrams: string): string | null {
@@ -47,7 +53,7 @@ function baseDraft(base: BenchProps["base"]): Draft {
  * the engine in the browser on every move. Saving sends only the lines; the
  * server recomputes everything and refuses a stale base (conflict).
  */
-export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) {
+export function Bench({ recipe, base, library, currency, canEdit, showCosts, lotSources }: BenchProps) {
   const router = useRouter();
   const toast = useToast();
   const byId = useMemo(() => new Map(library.map((i) => [i.id, i])), [library]);
@@ -170,9 +176,21 @@ export function Bench({ recipe, base, library, currency, canEdit }: BenchProps) 
       </div>
       <div className="space-y-6">
         <CompositionPanel composition={evaluation.composition} />
-        <CostPanel lines={engineLines} barMassGrams={state.barMassGrams} currency={currency} onBarMass={canEdit ? setBarMass : undefined} />
+        {showCosts ? (
+          <CostPanel
+            lines={engineLines}
+            ingredients={state.lines.map((l) => byId.get(l.ingredientId)!)}
+            lotSources={lotSources}
+            barMassGrams={state.barMassGrams}
+            currency={currency}
+            onBarMass={canEdit ? setBarMass : undefined}
+          />
+        ) : null}
         {canEdit && state.lines.length >= 2 ? (
           <TargetPanel ingredients={lineIngredients} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
+        ) : null}
+        {canEdit && state.lines.length >= 2 ? (
+          <LeastCostPanel lines={deferredLines} locked={deferredLocked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />
         ) : null}
       </div>
       {theirs ? (

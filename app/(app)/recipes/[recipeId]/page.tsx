@@ -3,9 +3,7 @@ import { notFound, redirect } from "next/navigation";
 import { Bench } from "@/components/bench/bench";
 import { RecipeDetailsDialog } from "@/components/recipes/recipe-details-dialog";
 import { RecipeHeader } from "@/components/recipes/recipe-header";
-import { getBaseCurrency } from "@/lib/data/exchange-rates";
-import { listBenchIngredients } from "@/lib/data/recipes-ingredients";
-import { getVersion } from "@/lib/data/recipes-versions";
+import { loadBenchData } from "./bench-data";
 import { loadRecipePage } from "./load";
 
 export async function generateMetadata({ params }: { params: Promise<{ recipeId: string }> }): Promise<Metadata> {
@@ -13,7 +11,7 @@ export async function generateMetadata({ params }: { params: Promise<{ recipeId:
   return { title: `${recipe.name} · bench` };
 }
 
-/** The bench: the latest version on sliders (read-only for those who may not edit). */
+/** The bench: the latest version on sliders (read-only for those who may not edit; without costs for those who may not see them). */
 export default async function BenchPage({ params }: { params: Promise<{ recipeId: string }> }) {
   const { viewer, recipe, readsAll, edits } = await loadRecipePage((await params).recipeId);
   // Production works from released versions only.
@@ -21,17 +19,7 @@ export default async function BenchPage({ params }: { params: Promise<{ recipeId
     if (!recipe.releasedVersionNo) notFound();
     redirect(`/recipes/${recipe.id}/versions/${recipe.releasedVersionNo}`);
   }
-  const workspaceId = viewer.workspace.id;
-  const [latest, library, currency] = await Promise.all([
-    recipe.latestVersionNo ? getVersion({ workspaceId, recipeId: recipe.id, versionNo: recipe.latestVersionNo }) : null,
-    listBenchIngredients({ workspaceId, on: new Date() }),
-    getBaseCurrency({ workspaceId }),
-  ]);
-  const base = {
-    versionNo: recipe.latestVersionNo,
-    barMassGrams: latest?.barMassGrams ?? recipe.barMassGrams,
-    lines: latest?.lines.map((l) => ({ ingredientId: l.ingredientId, percent: l.percent })) ?? [],
-  };
+  const { base, library, currency, showCosts, lotSources } = await loadBenchData({ viewer, recipe });
   return (
     <>
       <RecipeHeader recipe={recipe} current="bench" readsAll={readsAll} actions={edits ? <RecipeDetailsDialog recipe={recipe} /> : null} />
@@ -43,6 +31,8 @@ export default async function BenchPage({ params }: { params: Promise<{ recipeId
         library={library}
         currency={currency}
         canEdit={edits}
+        showCosts={showCosts}
+        lotSources={lotSources}
       />
     </>
   );
