@@ -1,14 +1,14 @@
 import { Badge } from "@/components/ui/badge";
 import { Card, CardHeader } from "@/components/ui/card";
 import { Table, Td, Th } from "@/components/ui/table";
-import type { SupplierGroup } from "@/lib/data/requirements";
+import type { VisibleSupplierGroup } from "@/lib/cost-visibility/purchasing";
 import { formatKg, formatMoney } from "@/lib/format";
 import { DraftOrderButton } from "./draft-order-button";
 
 const UNIT = { per_kg: "per kg", per_pack: "per pack", per_tonne: "per t" } as const;
 
-/** One supplier's part of the material requirements, with the order it would take. */
-export function RequirementsGroup({ group, batchIds, canBuy }: { group: SupplierGroup; batchIds: string[]; canBuy: boolean }) {
+/** One supplier's part of the material requirements, with the order it would take (its prices only for those who may see costs). */
+export function RequirementsGroup({ group, batchIds, canBuy, showPrices }: { group: VisibleSupplierGroup; batchIds: string[]; canBuy: boolean; showPrices: boolean }) {
   const toOrder = group.lines.some((l) => Number(l.order.quantityKg) > 0);
   return (
     <Card data-testid={`requirements-${group.supplierName ?? "no-supplier"}`}>
@@ -26,8 +26,8 @@ export function RequirementsGroup({ group, batchIds, canBuy }: { group: Supplier
             <Th numeric>On order</Th>
             <Th numeric>Short</Th>
             <Th numeric>To order</Th>
-            <Th numeric>Quote</Th>
-            <Th numeric>Amount</Th>
+            {showPrices ? <Th numeric>Quote</Th> : null}
+            {showPrices ? <Th numeric>Amount</Th> : null}
           </tr>
         </thead>
         <tbody>
@@ -45,8 +45,8 @@ export function RequirementsGroup({ group, batchIds, canBuy }: { group: Supplier
                 {formatKg(l.order.quantityKg, 3)}
                 {l.order.packs ? <span className="block text-xs text-cocoa-500">{l.order.packs} × {formatKg(l.quote?.packKg, 0)}</span> : null}
               </Td>
-              <Td numeric>{l.quote ? `${formatMoney(l.quote.price, l.quote.currency)} ${UNIT[l.quote.unit]}` : "—"}</Td>
-              <Td numeric>{l.amount && l.quote ? formatMoney(l.amount, l.quote.currency) : "—"}</Td>
+              {showPrices ? <Td numeric>{l.quote?.price ? `${formatMoney(l.quote.price, l.quote.currency)} ${UNIT[l.quote.unit]}` : "—"}</Td> : null}
+              {showPrices ? <Td numeric>{l.amount && l.quote ? formatMoney(l.amount, l.quote.currency) : "—"}</Td> : null}
             </tr>
           ))}
         </tbody>

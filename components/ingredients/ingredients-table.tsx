@@ -9,16 +9,15 @@ import { DataTable } from "@/components/tables/data-table";
 import { columnsFor } from "@/components/tables/features";
 import { TableToolbar } from "@/components/tables/table-toolbar";
 import { Badge } from "@/components/ui/badge";
-import type { IngredientRecord } from "@/lib/data/ingredients";
-import type { CurrentPrice } from "@/lib/data/prices";
+import type { IngredientListRow } from "@/lib/cost-visibility/ingredients";
 import { allergenLabel } from "@/lib/ingredients/allergens";
 import { KIND_LABELS, kindOptions } from "@/lib/ingredients/kinds";
 import { formatNumber } from "@/lib/format";
 
-type Row = IngredientRecord & { currentPrice: CurrentPrice | null };
+type Row = IngredientListRow;
 
 const col = columnsFor<Row>();
-const columns = [
+const allColumns = [
   col.accessor("name", {
     header: "Ingredient",
     sortFn: "text",
@@ -53,12 +52,16 @@ const columns = [
   }),
 ];
 
-/** The ingredient library: search, filter by kind, include archived, sort; refreshed by SWR. */
-export function IngredientsTable() {
+/**
+ * The ingredient library: search, filter by kind, include archived, sort; refreshed by SWR.
+ * `showPrices` comes from the server's canSeeCosts; the API leaves prices out for the others anyway.
+ */
+export function IngredientsTable({ showPrices }: { showPrices: boolean }) {
   const [search, setSearch] = useState("");
   const [kind, setKind] = useState("all");
   const [archived, setArchived] = useState(false);
-  const { data, error, isLoading } = useSWR(`/api/ingredients?archived=${archived ? "include" : "exclude"}`, fetchJson<{ ingredients: Row[] }>);
+  const { data, error, isLoading } = useSWR(`/api/ingredients?archived=${archived ? "include" : "exclude"}`, fetchJson<{ ingredients: Row[]; pricesShown: boolean }>);
+  const columns = useMemo(() => (showPrices ? allColumns : allColumns.filter((c) => c.id !== "price")), [showPrices]);
   const filters = useMemo(() => (kind === "all" ? [] : [{ id: "kind", value: KIND_LABELS[kind as keyof typeof KIND_LABELS] }]), [kind]);
   const rows = useMemo(() => data?.ingredients ?? [], [data]);
   return (

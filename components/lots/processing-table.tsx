@@ -26,7 +26,8 @@ function details(r: Row["record"]): string {
   return `shell ${formatKg(r.shellKg)}, dust ${formatKg(r.dustKg)}`;
 }
 
-export function ProcessingTable({ records }: { records: Row[] }) {
+/** The lot's processing records; the cost column only for those who may see costs. */
+export function ProcessingTable({ records, showCost }: { records: Row[]; showCost: boolean }) {
   if (records.length === 0) return <p className="text-sm text-cocoa-500">Nothing recorded yet.</p>;
   return (
     <table className="figures w-full text-sm" data-testid="processing-records">
@@ -37,7 +38,7 @@ export function ProcessingTable({ records }: { records: Row[] }) {
           <th className="px-2 py-1.5 text-right">In</th>
           <th className="px-2 py-1.5 text-right">Out</th>
           <th className="px-2 py-1.5">Details</th>
-          <th className="px-2 py-1.5 text-right">Cost</th>
+          {showCost ? <th className="px-2 py-1.5 text-right">Cost</th> : null}
           <th className="px-2 py-1.5">By</th>
         </tr>
       </thead>
@@ -52,7 +53,7 @@ export function ProcessingTable({ records }: { records: Row[] }) {
               {details(r)}
               {r.notes ? <span className="block text-xs text-cocoa-500">{r.notes}</span> : null}
             </td>
-            <td className="px-2 py-1.5 text-right">{r.cost ? formatMoney(r.cost, "") : "—"}</td>
+            {showCost ? <td className="px-2 py-1.5 text-right">{r.cost ? formatMoney(r.cost, "") : "—"}</td> : null}
             <td className="px-2 py-1.5">{performedBy ?? "—"}</td>
           </tr>
         ))}

@@ -1,12 +1,18 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { Badge } from "@/components/ui/badge";
+import { canSeeCosts } from "@/lib/auth/costs";
+import { requireViewer } from "@/lib/auth/current";
 import type { RecipeRecord } from "@/lib/data/recipes";
 import { pct } from "@/lib/recipes/format";
 import { cn } from "@/lib/cn";
 
-/** The recipe's name and state, and its pages (bench, history) for those who may see every version. */
-export function RecipeHeader({ recipe, current, readsAll, actions }: { recipe: RecipeRecord; current: "bench" | "history" | "version"; readsAll: boolean; actions?: ReactNode }) {
+/**
+ * The recipe's name and state, and its pages (bench, history) for those who may see every version;
+ * the Costs tab only for those who may see costs (both checks are cached per request).
+ */
+export async function RecipeHeader({ recipe, current, readsAll, actions }: { recipe: RecipeRecord; current: "bench" | "history" | "version"; readsAll: boolean; actions?: ReactNode }) {
+  const costsTab = await canSeeCosts(await requireViewer());
   const tab = (href: string, label: string, active: boolean) => (
     <Link
       href={href}
@@ -42,7 +48,7 @@ export function RecipeHeader({ recipe, current, readsAll, actions }: { recipe: R
         <nav aria-label="Recipe" className="flex gap-1">
           {tab(`/recipes/${recipe.id}`, "Bench", current === "bench")}
           {tab(`/recipes/${recipe.id}/history`, "History", current === "history")}
-          {tab(`/costing/${recipe.id}`, "Costs", false)}
+          {costsTab ? tab(`/costing/${recipe.id}`, "Costs", false) : null}
           {tab(`/recipes/${recipe.id}/label`, "Label", false)}
         </nav>
       ) : null}

@@ -22,18 +22,20 @@ function SortHeader({ label, sort, query, numeric, href }: { label: string; sort
   );
 }
 
-/** One page of recipes; production rows link to the released version, others to the bench. */
+/** One page of recipes; production rows link to the released version, others to the bench. The cost column only for those who may see costs. */
 export function RecipeTable({
   page,
   query,
   currency,
   releasedOnly,
+  showCost,
   href,
 }: {
   page: RecipeListPage;
   query: RecipeListQuery;
   currency: string;
   releasedOnly: boolean;
+  showCost: boolean;
   href: (change: Partial<RecipeListQuery>) => string;
 }) {
   return (
@@ -44,7 +46,7 @@ export function RecipeTable({
           <Th>Type</Th>
           <Th>Version</Th>
           <SortHeader label="Cocoa" sort="cocoa" query={query} numeric href={href} />
-          <SortHeader label="Cost per bar" sort="cost" query={query} numeric href={href} />
+          {showCost ? <SortHeader label="Cost per bar" sort="cost" query={query} numeric href={href} /> : null}
           <SortHeader label="Updated" sort="updated" query={query} href={href} />
         </tr>
       </thead>
@@ -66,7 +68,7 @@ export function RecipeTable({
               ) : null}
             </Td>
             <Td numeric>{pct(r.cocoaPercent)}</Td>
-            <Td numeric>{money(r.costPerBar, currency, 3)}</Td>
+            {showCost ? <Td numeric>{money(r.costPerBar, currency, 3)}</Td> : null}
             <Td>{dateFormat.format(r.updatedAt)}</Td>
           </tr>
         ))}

@@ -1,4 +1,5 @@
 import { Wordmark } from "@/components/brand/wordmark";
+import { canSeeCosts } from "@/lib/auth/costs";
 import type { Viewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 import { listMembershipsForUser } from "@/lib/data/memberships";
@@ -9,8 +10,9 @@ import { UserMenu } from "./user-menu";
 import { WorkspaceSwitcher } from "./workspace-switcher";
 
 export async function AppHeader({ viewer }: { viewer: Viewer }) {
+  const seesCosts = await canSeeCosts(viewer);
   const items = navItems
-    .filter((i) => can(viewer.role, i.permission) && (!i.demoOnly || mailboxEnabled()))
+    .filter((i) => can(viewer.role, i.permission) && (!i.demoOnly || mailboxEnabled()) && (!i.costs || seesCosts))
     .map(({ href, label }) => ({ href, label }));
   const workspaces = await listMembershipsForUser({ userId: viewer.user.id });
   return (

@@ -32,6 +32,9 @@ describe("CSV export", () => {
   });
 
   it("exports quotes with prices per kg in the base currency, escaping supplier names", async () => {
+    // Quotes are prices: the buyer's export (a viewer gets 403 while costs are not shared; cost-visibility.test.ts).
+    freshRequest();
+    await signInAs(team.people.buyer.id, team.workspaceId);
     const supplier = await makeSupplier(team.workspaceId, { name: "=cmd|' /C calc'!A0" });
     const sugar = await makeIngredient(team.workspaceId, { name: "Sugar X" });
     await makeQuote(team.workspaceId, team.people.buyer.id, { supplierId: supplier.id, ingredientId: sugar.id, price: "985", unit: "per_tonne" });

@@ -222,8 +222,10 @@ const rows: MatrixRow[] = [
       return fromStatus((await getFile(get(`/api/files/${fileId}`), params({ fileId }))).status);
     },
   },
-  { name: "GET /api/quotes", permission: "ingredients.read", outsider: "ok", run: async () => fromStatus((await listQuotesRoute(get("/api/quotes"), params())).status) },
-  { name: "GET /api/quotes/export", permission: "ingredients.read", outsider: "ok", run: async () => fromStatus((await exportQuotes(get("/api/quotes/export"), params())).status) },
+  // Quotes and current prices are money: costs.read while the owner has not shared costs (lib/auth/costs.ts;
+  // the shared case is in matrix-cost-visibility.test.ts). Product rule, no outside source.
+  { name: "GET /api/quotes", permission: "costs.read", outsider: "ok", run: async () => fromStatus((await listQuotesRoute(get("/api/quotes"), params())).status) },
+  { name: "GET /api/quotes/export", permission: "costs.read", outsider: "ok", run: async () => fromStatus((await exportQuotes(get("/api/quotes/export"), params())).status) },
   {
     name: "POST /api/price-lists/preview",
     permission: "suppliers.edit",
@@ -239,7 +241,7 @@ const rows: MatrixRow[] = [
   { name: "GET /api/price-lists", permission: "ingredients.read", outsider: "ok", run: async () => fromStatus((await listPriceLists(get("/api/price-lists"), params())).status) },
   {
     name: "GET /api/prices/current",
-    permission: "ingredients.read",
+    permission: "costs.read",
     outsider: "ok", // answers "unknown_ingredient" for ids of another workspace (tests/integration/quotes.test.ts)
     run: async ({ team }) => {
       const id = (await makeIngredient(team.workspaceId)).id;

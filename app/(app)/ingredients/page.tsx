@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { IngredientsTable } from "@/components/ingredients/ingredients-table";
 import { Button } from "@/components/ui/button";
+import { canSeeCosts } from "@/lib/auth/costs";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 
@@ -9,14 +10,15 @@ export const metadata: Metadata = { title: "Ingredients" };
 
 export default async function IngredientsPage() {
   const viewer = await requireViewer();
+  const showPrices = await canSeeCosts(viewer);
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-end justify-between gap-4">
         <div>
           <h1 className="text-3xl font-bold">Ingredients</h1>
           <p className="mt-2 max-w-2xl text-cocoa-700">
-            What each ingredient is made of, per 100 g, with its allergens and where the figures come from — and what its preferred
-            supplier charges today.
+            What each ingredient is made of, per 100 g, with its allergens and where the figures come from
+            {showPrices ? " — and what its preferred supplier charges today" : ""}.
           </p>
         </div>
         <div className="flex gap-2">
@@ -32,7 +34,7 @@ export default async function IngredientsPage() {
           ) : null}
         </div>
       </div>
-      <IngredientsTable />
+      <IngredientsTable showPrices={showPrices} />
     </div>
   );
 }

@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { Table, Td, Th } from "@/components/ui/table";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
-import { listLots } from "@/lib/data/lots";
+import { listLotsForViewer } from "@/lib/cost-visibility/lots";
 import { getNibStock } from "@/lib/data/nib-stock";
 import { getWorkspaceBaseCurrency } from "@/lib/data/workspaces";
 import { formatDate, formatKg, formatMoney, formatPercent } from "@/lib/format";
@@ -14,8 +14,8 @@ export const metadata: Metadata = { title: "Bean lots" };
 
 export default async function LotsPage() {
   const viewer = await requireViewer();
-  const [lots, base, nibStock] = await Promise.all([
-    listLots({ workspaceId: viewer.workspace.id }),
+  const [{ lots, costsShown }, base, nibStock] = await Promise.all([
+    listLotsForViewer({ viewer }),
     getWorkspaceBaseCurrency({ workspaceId: viewer.workspace.id }),
     getNibStock({ workspaceId: viewer.workspace.id }),
   ]);
@@ -25,8 +25,8 @@ export default async function LotsPage() {
         <div>
           <h1 className="text-3xl font-bold">Bean lots</h1>
           <p className="mt-2 max-w-2xl text-cocoa-700">
-            Every sack of beans from arrival to nibs: what was lost at sorting, roasting and winnowing, and what a kilo of
-            nibs really cost.
+            Every sack of beans from arrival to nibs: what was lost at sorting, roasting and winnowing
+            {costsShown ? ", and what a kilo of nibs really cost" : ""}.
           </p>
         </div>
         <div className="flex gap-2">
@@ -54,7 +54,7 @@ export default async function LotsPage() {
               <Th numeric>Nibs</Th>
               <Th numeric>Nibs in stock</Th>
               <Th numeric>Nib yield</Th>
-              <Th numeric>Nib cost per kg</Th>
+              {costsShown ? <Th numeric>Nib cost per kg</Th> : null}
             </tr>
           </thead>
           <tbody>
@@ -78,7 +78,9 @@ export default async function LotsPage() {
                   {formatPercent(l.chain.cumulativeYieldPercent)}
                   {l.chain.nibMassEstimated ? <Badge className="ml-2">estimate</Badge> : null}
                 </Td>
-                <Td numeric>{l.nibCost.perKg ? formatMoney(l.nibCost.perKg, base) : <span className="text-brick">{l.nibCost.problem}</span>}</Td>
+                {l.nibCost ? (
+                  <Td numeric>{l.nibCost.perKg ? formatMoney(l.nibCost.perKg, base) : <span className="text-brick">{l.nibCost.problem}</span>}</Td>
+                ) : null}
               </tr>
             ))}
           </tbody>

@@ -1,9 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { CostsNotAllowed } from "@/components/costing/costs-not-allowed";
 import { PriceListHistory } from "@/components/prices/price-list-history";
 import { QuotesTable } from "@/components/prices/quotes-table";
 import { Button } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
+import { canSeeCosts } from "@/lib/auth/costs";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 
@@ -11,6 +13,7 @@ export const metadata: Metadata = { title: "Prices" };
 
 export default async function PricesPage() {
   const viewer = await requireViewer();
+  if (!(await canSeeCosts(viewer))) return <CostsNotAllowed />;
   const buyer = can(viewer.role, "suppliers.edit");
   return (
     <div className="space-y-6">

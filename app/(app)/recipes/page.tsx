@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 import { getBaseCurrency } from "@/lib/data/exchange-rates";
-import { listRecipes } from "@/lib/data/recipes-list";
+import { listRecipesForViewer } from "@/lib/cost-visibility/recipes";
 import { listHref, parseListQuery } from "./list-query";
 
 export const metadata: Metadata = { title: "Recipes" };
@@ -17,9 +17,9 @@ export default async function RecipesPage({ searchParams }: { searchParams: Prom
   const viewer = await requireViewer();
   if (!can(viewer.role, "recipes.readReleased")) notFound();
   const releasedOnly = !can(viewer.role, "recipes.read");
-  const query = parseListQuery(await searchParams);
-  const [page, currency] = await Promise.all([
-    listRecipes({ workspaceId: viewer.workspace.id, query, releasedOnly }),
+  const asked = parseListQuery(await searchParams);
+  const [{ page, query, costsShown }, currency] = await Promise.all([
+    listRecipesForViewer({ viewer, query: asked }),
     getBaseCurrency({ workspaceId: viewer.workspace.id }),
   ]);
   const filtered = Boolean(query.q || query.type || query.status);
@@ -45,7 +45,7 @@ export default async function RecipesPage({ searchParams }: { searchParams: Prom
         </p>
       ) : (
         <>
-          <RecipeTable page={page} query={query} currency={currency} releasedOnly={releasedOnly} href={(c) => listHref(query, c)} />
+          <RecipeTable page={page} query={query} currency={currency} releasedOnly={releasedOnly} showCost={costsShown} href={(c) => listHref(query, c)} />
           <Pagination page={page.page} pageCount={page.pageCount} total={page.total} href={(p) => listHref(query, { page: p })} />
         </>
       )}

@@ -1,17 +1,13 @@
 import { apiRoute } from "@/lib/api/route";
-import { listIngredients } from "@/lib/data/ingredients";
-import { getCurrentPrices } from "@/lib/data/prices";
-import { isoDay } from "@/lib/pricing/convert";
+import { listIngredientsForViewer } from "@/lib/cost-visibility/ingredients";
 import { ingredientListQuerySchema } from "@/lib/validation/ingredients";
 
-/** GET /api/ingredients — the library, each with its preferred supplier's current price per kg. */
+/**
+ * GET /api/ingredients — the library, each with its preferred supplier's current price per kg
+ * for those who may see costs (lib/auth/costs.ts); without prices (`pricesShown: false`) for the others.
+ */
 export const GET = apiRoute({
   permission: "ingredients.read",
   schema: ingredientListQuerySchema,
-  handler: async ({ input, viewer }) => {
-    const workspaceId = viewer.workspace.id;
-    const list = await listIngredients({ workspaceId, archived: input.archived });
-    const prices = await getCurrentPrices({ workspaceId, ingredientIds: list.map((i) => i.id), on: isoDay(new Date()) });
-    return { ingredients: list.map((i) => ({ ...i, currentPrice: prices[i.id] ?? null })) };
-  },
+  handler: async ({ input, viewer }) => listIngredientsForViewer({ viewer, archived: input.archived }),
 });

@@ -1,10 +1,13 @@
 import { apiRoute } from "@/lib/api/route";
-import { listLots } from "@/lib/data/lots";
+import { listLotsForViewer } from "@/lib/cost-visibility/lots";
 import { emptySchema } from "@/lib/validation/auth";
 
-/** GET /api/lots — the workspace's bean lots with yield chain and nib cost per kg (base currency). */
+/**
+ * GET /api/lots — the workspace's bean lots with yield chain and nib cost per kg (base currency);
+ * the nib cost is null for a viewer who may not see costs (lib/auth/costs.ts).
+ */
 export const GET = apiRoute({
   permission: "lots.read",
   schema: emptySchema,
-  handler: async ({ viewer }) => ({ lots: await listLots({ workspaceId: viewer.workspace.id }) }),
+  handler: async ({ viewer }) => listLotsForViewer({ viewer }),
 });

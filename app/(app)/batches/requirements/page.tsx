@@ -6,8 +6,8 @@ import { Card } from "@/components/ui/card";
 import { requireViewer } from "@/lib/auth/current";
 import { formatGrams } from "@/lib/batches/format-mass";
 import { can } from "@/lib/auth/permissions";
+import { materialRequirementsForViewer } from "@/lib/cost-visibility/purchasing";
 import { listBatches } from "@/lib/data/batches";
-import { materialRequirements } from "@/lib/data/requirements";
 import { formatDate } from "@/lib/format";
 import { idSchema } from "@/lib/validation/auth";
 
@@ -21,7 +21,7 @@ export default async function RequirementsPage({ searchParams }: { searchParams:
   const asked = (Array.isArray(batch) ? batch : batch ? [batch] : []).filter((id) => idSchema.safeParse(id).success);
   const planned = await listBatches({ workspaceId, status: "planned" });
   const chosen = asked.length ? planned.filter((b) => asked.includes(b.id)).map((b) => b.id) : planned.map((b) => b.id);
-  const { groups } = await materialRequirements({ workspaceId, batchIds: chosen });
+  const { groups, costsShown } = await materialRequirementsForViewer({ viewer, batchIds: chosen });
   return (
     <div className="space-y-6">
       <div>
@@ -57,7 +57,7 @@ export default async function RequirementsPage({ searchParams }: { searchParams:
         </Card>
       )}
       {groups.map((g) => (
-        <RequirementsGroup key={g.supplierId ?? "none"} group={g} batchIds={chosen} canBuy={can(viewer.role, "purchases.manage")} />
+        <RequirementsGroup key={g.supplierId ?? "none"} group={g} batchIds={chosen} canBuy={can(viewer.role, "purchases.manage")} showPrices={costsShown} />
       ))}
     </div>
   );

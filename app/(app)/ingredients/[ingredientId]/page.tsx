@@ -13,8 +13,8 @@ import { Button } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
+import { getIngredientPriceForViewer } from "@/lib/cost-visibility/ingredients";
 import { getIngredientById } from "@/lib/data/ingredients";
-import { getCurrentPrices } from "@/lib/data/prices";
 import { listSuppliers } from "@/lib/data/suppliers";
 import { KIND_LABELS } from "@/lib/ingredients/kinds";
 import { orNotFound, pageId } from "@/lib/pages/or-not-found";
@@ -28,11 +28,8 @@ export default async function IngredientPage({ params }: { params: Promise<{ ing
   const workspaceId = viewer.workspace.id;
   const ingredient = await orNotFound(getIngredientById({ workspaceId, ingredientId }));
   const today = isoDay(new Date());
-  const [suppliers, prices] = await Promise.all([
-    listSuppliers({ workspaceId }),
-    getCurrentPrices({ workspaceId, ingredientIds: [ingredientId], on: today }),
-  ]);
-  const price = prices[ingredientId];
+  const [suppliers, priced] = await Promise.all([listSuppliers({ workspaceId }), getIngredientPriceForViewer({ viewer, ingredientId, on: today })]);
+  const price = priced.shown ? priced.price : null;
   const buyer = can(viewer.role, "suppliers.edit");
   const supplierOptions = suppliers.map((s) => ({ value: s.id, label: s.name, currency: s.currency }));
   return (
@@ -55,53 +52,61 @@ export default async function IngredientPage({ params }: { params: Promise<{ ing
         <IngredientProfile ingredient={ingredient} />
       </Card>
 
-      <Card>
-        <CardHeader
-          title="Price"
-          description="The current price is the latest valid quote of the preferred supplier, in the workspace's base currency."
-          action={
-            <Button asChild variant="secondary" size="sm">
-              <a href={`/api/quotes/export?ingredientId=${ingredient.id}`} download>
-                Export quotes
-              </a>
-            </Button>
-          }
-        />
-        <div className="mb-6 flex flex-wrap items-center gap-6">
-          <div>
-            <p className="text-sm font-semibold text-cocoa-700">Preferred supplier</p>
-            {buyer ? (
-              <PreferredSupplier ingredientId={ingredient.id} value={ingredient.preferredSupplierId} suppliers={supplierOptions} />
-            ) : (
-              <p>{ingredient.preferredSupplierName ?? "None chosen"}</p>
-            )}
+      {priced.shown ? (
+        <Card>
+          <CardHeader
+            title="Price"
+            description="The current price is the latest valid quote of the preferred supplier, in the workspace's base currency."
+            action={
+              <Button asChild variant="secondary" size="sm">
+                <a href={`/api/quotes/export?ingredientId=${ingredient.id}`} download>
+                  Export quotes
+                </a>
+              </Button>
+            }
+          />
+          <div className="mb-6 flex flex-wrap items-center gap-6">
+            <div>
+              <p className="text-sm font-semibold text-cocoa-700">Preferred supplier</p>
+              {buyer ? (
+                <PreferredSupplier ingredientId={ingredient.id} value={ingredient.preferredSupplierId} suppliers={supplierOptions} />
+              ) : (
+                <p>{ingredient.preferredSupplierName ?? "None chosen"}</p>
+              )}
+            </div>
+            <div data-testid="current-price">
+              <p className="text-sm font-semibold text-cocoa-700">Current price, {today}</p>
+              {price?.status === "priced" ? (
+                <p>
+                  <span className="figures text-2xl font-bold">{perKg(price.pricePerKg, price.baseCurrency)}</span>
+                  <span className="ml-2 text-sm text-cocoa-500">
+                    {quotedPrice(price.quoted)} from {price.supplierName}
+                    {price.quoted.currency !== price.baseCurrency ? ` at ${price.rate.rateToBase} ${price.baseCurrency}/${price.quoted.currency} (${price.rate.validOn})` : ""}
+                  </span>
+                </p>
+              ) : (
+                <p className="text-brick">{price?.message}</p>
+              )}
+            </div>
           </div>
-          <div data-testid="current-price">
-            <p className="text-sm font-semibold text-cocoa-700">Current price, {today}</p>
-            {price?.status === "priced" ? (
-              <p>
-                <span className="figures text-2xl font-bold">{perKg(price.pricePerKg, price.baseCurrency)}</span>
-                <span className="ml-2 text-sm text-cocoa-500">
-                  {quotedPrice(price.quoted)} from {price.supplierName}
-                  {price.quoted.currency !== price.baseCurrency ? ` at ${price.rate.rateToBase} ${price.baseCurrency}/${price.quoted.currency} (${price.rate.validOn})` : ""}
-                </span>
-              </p>
-            ) : (
-              <p className="text-brick">{price?.message}</p>
-            )}
+          <PriceHistoryChart ingredientId={ingredient.id} today={today} />
+          <div className="mt-6">
+            <QuotesTable filter={{ ingredientId: ingredient.id }} hide={["ingredient"]} />
           </div>
-        </div>
-        <PriceHistoryChart ingredientId={ingredient.id} today={today} />
-        <div className="mt-6">
-          <QuotesTable filter={{ ingredientId: ingredient.id }} hide={["ingredient"]} />
-        </div>
-        {buyer && !ingredient.archived ? (
-          <div className="mt-8 border-t border-sand-light pt-6">
-            <h3 className="mb-4 font-bold">Record a quote</h3>
-            <QuoteForm ingredientId={ingredient.id} suppliers={supplierOptions} defaultCurrency={supplierOptions[0]?.currency ?? "EUR"} today={today} />
-          </div>
-        ) : null}
-      </Card>
+          {buyer && !ingredient.archived ? (
+            <div className="mt-8 border-t border-sand-light pt-6">
+              <h3 className="mb-4 font-bold">Record a quote</h3>
+              <QuoteForm ingredientId={ingredient.id} suppliers={supplierOptions} defaultCurrency={supplierOptions[0]?.currency ?? "EUR"} today={today} />
+            </div>
+          ) : null}
+        </Card>
+      ) : (
+        <Card>
+          <CardHeader title="Supplier" description="Prices and quotes are for the owner, the buyer and the formulator unless the owner shares costs." />
+          <p className="text-sm font-semibold text-cocoa-700">Preferred supplier</p>
+          <p>{ingredient.preferredSupplierName ?? "None chosen"}</p>
+        </Card>
+      )}
 
       <Card>
         <CardHeader title="Spec sheets and certificates" description="Only members of this workspace can download them." />

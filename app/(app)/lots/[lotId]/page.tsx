@@ -12,7 +12,8 @@ import { YieldChain } from "@/components/lots/yield-chain";
 import { Card, CardHeader } from "@/components/ui/card";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
-import { getLotDetail, listRoastPresets } from "@/lib/data/lots";
+import { getLotForViewer } from "@/lib/cost-visibility/lots";
+import { listRoastPresets } from "@/lib/data/lots";
 import { AppError } from "@/lib/errors";
 import { formatDate, formatKg, formatMoney, formatPercent } from "@/lib/format";
 import { idSchema } from "@/lib/validation/auth";
@@ -25,13 +26,13 @@ export default async function LotPage({ params }: { params: Promise<{ lotId: str
   if (!idSchema.safeParse(lotId).success) notFound();
   let detail;
   try {
-    detail = await getLotDetail({ workspaceId: viewer.workspace.id, lotId });
+    detail = await getLotForViewer({ viewer, lotId });
   } catch (err) {
     if (err instanceof AppError && err.code === "not_found") notFound();
     throw err;
   }
   const presets = can(viewer.role, "lots.process") ? await listRoastPresets({ workspaceId: viewer.workspace.id }) : [];
-  const { lot, chain, nibCost, baseCurrency } = detail;
+  const { lot, chain, nibCost, baseCurrency, costsShown } = detail;
   const facts: [string, string][] = [
     ["Origin", [lot.originCountry, lot.originRegion].filter(Boolean).join(", ")],
     ["Farm or cooperative", lot.producer ?? "—"],
@@ -40,8 +41,9 @@ export default async function LotPage({ params }: { params: Promise<{ lotId: str
     ["Arrived", formatDate(lot.arrivedOn)],
     ["Received", formatKg(lot.massReceivedKg, 1)],
     ["Moisture on arrival", formatPercent(lot.moisturePercent)],
-    ["Price paid", formatMoney(lot.pricePaid, lot.currency)],
   ];
+  // Money only for those who may see costs (lib/auth/costs.ts); the rest of the page is the same for everyone.
+  if (lot.pricePaid !== null) facts.push(["Price paid", formatMoney(lot.pricePaid, lot.currency)]);
   return (
     <div className="space-y-8">
       <div>
@@ -56,17 +58,26 @@ export default async function LotPage({ params }: { params: Promise<{ lotId: str
           ))}
         </dl>
       </div>
-      <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
+      <div className={nibCost ? "grid gap-6 lg:grid-cols-[1fr_22rem]" : undefined}>
         <Card>
           <CardHeader title="From beans to nibs" description="Mass after each step, and each step's yield against the usual range." />
           <YieldChain received={lot.massReceivedKg} chain={chain} />
         </Card>
-        <NibCostCard nibCost={nibCost} chain={chain} baseCurrency={baseCurrency} costs={detail.costs} lot={lot} processingCost={detail.processingCost} />
+        {nibCost && lot.pricePaid !== null ? (
+          <NibCostCard
+            nibCost={nibCost}
+            chain={chain}
+            baseCurrency={baseCurrency}
+            costs={detail.costs}
+            lot={{ pricePaid: lot.pricePaid, currency: lot.currency }}
+            processingCost={detail.processingCost}
+          />
+        ) : null}
       </div>
       <LotBatches workspaceId={viewer.workspace.id} lotId={lot.id} />
       <Card>
         <CardHeader title="Processing records" description="Insert-only: a wrong record is corrected by a new one, with a note." />
-        <ProcessingTable records={detail.records} />
+        <ProcessingTable records={detail.records} showCost={costsShown} />
         {can(viewer.role, "lots.process") ? (
           <div className="mt-6 border-t border-sand pt-6">
             <ProcessingForm lotId={lot.id} presets={presets.map((p) => ({ id: p.id, name: p.name, temperatureC: p.temperatureC, minutes: p.minutes }))} />

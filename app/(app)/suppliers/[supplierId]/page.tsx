@@ -9,6 +9,7 @@ import { SupplierForm } from "@/components/suppliers/supplier-form";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
+import { canSeeCosts } from "@/lib/auth/costs";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 import { listIngredients } from "@/lib/data/ingredients";
@@ -24,6 +25,7 @@ export default async function SupplierPage({ params }: { params: Promise<{ suppl
   const workspaceId = viewer.workspace.id;
   const supplier = await orNotFound(getSupplierById({ workspaceId, supplierId }));
   const buyer = can(viewer.role, "suppliers.edit");
+  const showPrices = await canSeeCosts(viewer);
   const ingredients = buyer ? await listIngredients({ workspaceId }) : [];
   return (
     <div className="space-y-8">
@@ -55,21 +57,23 @@ export default async function SupplierPage({ params }: { params: Promise<{ suppl
         ) : null}
       </div>
 
-      <Card>
-        <CardHeader title="Quotes" description="Every price this supplier has given, newest first. The current one for each ingredient is marked." />
-        <QuotesTable filter={{ supplierId: supplier.id }} hide={["supplier"]} />
-        {buyer && !supplier.archived ? (
-          <div className="mt-8 border-t border-sand-light pt-6">
-            <h3 className="mb-4 font-bold">Record a quote</h3>
-            <QuoteForm
-              supplierId={supplier.id}
-              ingredients={ingredients.map((i) => ({ value: i.id, label: i.name }))}
-              defaultCurrency={supplier.currency}
-              today={isoDay(new Date())}
-            />
-          </div>
-        ) : null}
-      </Card>
+      {showPrices ? (
+        <Card>
+          <CardHeader title="Quotes" description="Every price this supplier has given, newest first. The current one for each ingredient is marked." />
+          <QuotesTable filter={{ supplierId: supplier.id }} hide={["supplier"]} />
+          {buyer && !supplier.archived ? (
+            <div className="mt-8 border-t border-sand-light pt-6">
+              <h3 className="mb-4 font-bold">Record a quote</h3>
+              <QuoteForm
+                supplierId={supplier.id}
+                ingredients={ingredients.map((i) => ({ value: i.id, label: i.name }))}
+                defaultCurrency={supplier.currency}
+                today={isoDay(new Date())}
+              />
+            </div>
+          ) : null}
+        </Card>
+      ) : null}
 
       <Card>
         <CardHeader title="Price-list uploads" />

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { apiRoute } from "@/lib/api/route";
+import { requireCostReader } from "@/lib/auth/costs";
 import { getCurrentPrices } from "@/lib/data/prices";
 import { isoDay } from "@/lib/pricing/convert";
 import { isoDaySchema } from "@/lib/validation/decimal";
@@ -15,11 +16,15 @@ const querySchema = z
   })
   .strict();
 
-/** GET /api/prices/current?ingredientIds=a,b&on=YYYY-MM-DD — preferred suppliers' current prices per kg in base currency. */
+/**
+ * GET /api/prices/current?ingredientIds=a,b&on=YYYY-MM-DD — preferred suppliers' current prices per kg in base currency;
+ * 403 for a viewer who may not see costs.
+ */
 export const GET = apiRoute({
   permission: "ingredients.read",
   schema: querySchema,
-  handler: async ({ input, viewer }) => ({
-    prices: await getCurrentPrices({ workspaceId: viewer.workspace.id, ingredientIds: input.ingredientIds, on: input.on ?? isoDay(new Date()) }),
-  }),
+  handler: async ({ input, viewer }) => {
+    await requireCostReader(viewer);
+    return { prices: await getCurrentPrices({ workspaceId: viewer.workspace.id, ingredientIds: input.ingredientIds, on: input.on ?? isoDay(new Date()) }) };
+  },
 });

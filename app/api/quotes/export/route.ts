@@ -1,4 +1,5 @@
 import { apiRoute } from "@/lib/api/route";
+import { requireCostReader } from "@/lib/auth/costs";
 import { csvResponse, toCsv } from "@/lib/csv/export";
 import { listQuotes, type QuoteRecord } from "@/lib/data/quotes";
 import { isoDay } from "@/lib/pricing/convert";
@@ -6,11 +7,12 @@ import { quoteListQuerySchema } from "@/lib/validation/quotes";
 
 const UNIT = { per_kg: "per kg", per_pack: "per pack", per_tonne: "per tonne" } as const;
 
-/** GET /api/quotes/export — quotes as CSV, safe to open in a spreadsheet. */
+/** GET /api/quotes/export — quotes as CSV, safe to open in a spreadsheet; 403 for a viewer who may not see costs. */
 export const GET = apiRoute({
   permission: "ingredients.read",
   schema: quoteListQuerySchema,
   handler: async ({ input, viewer }) => {
+    await requireCostReader(viewer);
     const { baseCurrency, quotes } = await listQuotes({ workspaceId: viewer.workspace.id, ...input, on: input.on ?? isoDay(new Date()) });
     const columns = [
       { header: "Ingredient", value: (q: QuoteRecord) => q.ingredientName },

@@ -10,7 +10,8 @@ import { Table, Td, Th } from "@/components/ui/table";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 import { listBatches } from "@/lib/data/batches";
-import { getPurchaseOrder, type OrderDetail } from "@/lib/data/purchase-orders";
+import { getPurchaseOrderForViewer } from "@/lib/cost-visibility/purchasing";
+import type { OrderDetail } from "@/lib/data/purchase-orders";
 import { AppError } from "@/lib/errors";
 import { formatDate, formatKg, formatMoney } from "@/lib/format";
 import { idSchema } from "@/lib/validation/auth";
@@ -24,8 +25,9 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
   const { orderId } = await params;
   if (!idSchema.safeParse(orderId).success) notFound();
   let order: OrderDetail;
+  let costsShown: boolean;
   try {
-    order = await getPurchaseOrder({ workspaceId: viewer.workspace.id, orderId });
+    ({ order, costsShown } = await getPurchaseOrderForViewer({ viewer, orderId }));
   } catch (err) {
     if (err instanceof AppError && err.code === "not_found") notFound();
     throw err;
@@ -38,8 +40,8 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
     ["Drafted", `${formatDate(order.createdAt)}${order.createdByName ? ` by ${order.createdByName}` : ""}`],
     ["Sent", order.sentAt ? `${formatDate(order.sentAt)} to ${order.sentTo}` : "—"],
     ["Received", formatDate(order.receivedOn)],
-    ["Value", Object.entries(order.totals).map(([c, v]) => formatMoney(v, c)).join(" + ") || "—"],
   ];
+  if (costsShown) facts.push(["Value", Object.entries(order.totals).map(([c, v]) => formatMoney(v, c)).join(" + ") || "—"]);
   return (
     <div className="space-y-8">
       <div className="flex flex-wrap items-start justify-between gap-4">
@@ -80,7 +82,10 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
         </p>
       ) : null}
       <Card>
-        <CardHeader title="Lines" description="Rounded up to the supplier's packs and minimum order; prices from the current quote when drafted." />
+        <CardHeader
+          title="Lines"
+          description={`Rounded up to the supplier's packs and minimum order${costsShown ? "; prices from the current quote when drafted" : ""}.`}
+        />
         {canBuy && order.status === "drafted" ? (
           <OrderLinesForm orderId={order.id} lines={order.lines} notes={order.notes} />
         ) : (
@@ -89,8 +94,8 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
               <tr>
                 <Th>Ingredient</Th>
                 <Th numeric>Quantity</Th>
-                <Th numeric>Price</Th>
-                <Th numeric>Amount</Th>
+                {costsShown ? <Th numeric>Price</Th> : null}
+                {costsShown ? <Th numeric>Amount</Th> : null}
               </tr>
             </thead>
             <tbody>
@@ -101,8 +106,8 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
                     {formatKg(l.quantityKg, 3)}
                     {l.packs ? <span className="block text-xs text-cocoa-500">{l.packs} × {formatKg(l.packKg, 0)}</span> : null}
                   </Td>
-                  <Td numeric>{l.price && l.currency && l.priceUnit ? `${formatMoney(l.price, l.currency)} ${UNIT[l.priceUnit]}` : "—"}</Td>
-                  <Td numeric>{l.amount && l.currency ? formatMoney(l.amount, l.currency) : "—"}</Td>
+                  {costsShown ? <Td numeric>{l.price && l.currency && l.priceUnit ? `${formatMoney(l.price, l.currency)} ${UNIT[l.priceUnit]}` : "—"}</Td> : null}
+                  {costsShown ? <Td numeric>{l.amount && l.currency ? formatMoney(l.amount, l.currency) : "—"}</Td> : null}
                 </tr>
               ))}
             </tbody>

@@ -6,7 +6,8 @@ import { RecipeHeader } from "@/components/recipes/recipe-header";
 import { Badge } from "@/components/ui/badge";
 import { Card, CardHeader } from "@/components/ui/card";
 import { getBaseCurrency } from "@/lib/data/exchange-rates";
-import { getVersion, listVersionNumbers } from "@/lib/data/recipes-versions";
+import { getVersionForViewer } from "@/lib/cost-visibility/recipes";
+import { listVersionNumbers } from "@/lib/data/recipes-versions";
 import { diffComposition, diffCost, diffLines } from "@/lib/recipes/diff";
 import { money, pct } from "@/lib/recipes/format";
 import { verdict } from "@/lib/recipes/verdict";
@@ -20,7 +21,7 @@ const pick = (v: string | string[] | undefined, fallback: number) => {
   return parsed.success ? parsed.data : fallback;
 };
 
-/** Two versions side by side: lines, composition, cost, and which standards each meets. */
+/** Two versions side by side: lines, composition, cost (for those who may see costs), and which standards each meets. */
 export default async function ComparePage({
   params,
   searchParams,
@@ -34,9 +35,9 @@ export default async function ComparePage({
   const a = pick(q.a, Math.max(1, recipe.latestVersionNo - 1));
   const b = pick(q.b, recipe.latestVersionNo);
   const workspaceId = viewer.workspace.id;
-  const [va, vb, numbers, currency] = await Promise.all([
-    getVersion({ workspaceId, recipeId: recipe.id, versionNo: a }).catch(orNotFound),
-    getVersion({ workspaceId, recipeId: recipe.id, versionNo: b }).catch(orNotFound),
+  const [{ version: va, costsShown }, { version: vb }, numbers, currency] = await Promise.all([
+    getVersionForViewer({ viewer, recipeId: recipe.id, versionNo: a }).catch(orNotFound),
+    getVersionForViewer({ viewer, recipeId: recipe.id, versionNo: b }).catch(orNotFound),
     listVersionNumbers({ workspaceId, recipeId: recipe.id }),
     getBaseCurrency({ workspaceId }),
   ]);
@@ -58,10 +59,12 @@ export default async function ComparePage({
             <CardHeader title="Composition" description="Percent of the finished bar, as computed at each save." />
             <DiffTable rows={diffComposition(va.evaluation.composition, vb.evaluation.composition)} a={la} b={lb} format={(v) => pct(v)} unit="%" />
           </Card>
-          <Card>
-            <CardHeader title="Cost" description={`Ingredients only, at the prices of each save, in ${currency}.`} />
-            <DiffTable rows={diffCost(comparable(va), comparable(vb))} a={la} b={lb} format={(v) => money(v, currency, 3)} unit={currency} />
-          </Card>
+          {costsShown ? (
+            <Card>
+              <CardHeader title="Cost" description={`Ingredients only, at the prices of each save, in ${currency}.`} />
+              <DiffTable rows={diffCost(comparable(va), comparable(vb))} a={la} b={lb} format={(v) => money(v, currency, 3)} unit={currency} />
+            </Card>
+          ) : null}
           <Card>
             <CardHeader title="Standards" description="Categories whose result differs between the two." />
             <ul className="divide-y divide-sand-light text-sm">

@@ -7,9 +7,9 @@ import { VersionActions } from "@/components/recipes/version-actions";
 import { Badge } from "@/components/ui/badge";
 import { Card, CardHeader } from "@/components/ui/card";
 import { Table, Td, Th } from "@/components/ui/table";
+import { listVersionsForViewer } from "@/lib/cost-visibility/recipes";
 import { getBaseCurrency } from "@/lib/data/exchange-rates";
 import { listReleases } from "@/lib/data/recipes-releases";
-import { listVersions } from "@/lib/data/recipes-versions";
 import { money, pct } from "@/lib/recipes/format";
 import { loadRecipePage } from "../load";
 
@@ -22,8 +22,8 @@ export default async function HistoryPage({ params }: { params: Promise<{ recipe
   const { viewer, recipe, readsAll, edits } = await loadRecipePage((await params).recipeId);
   if (!readsAll) notFound();
   const workspaceId = viewer.workspace.id;
-  const [versions, releases, currency] = await Promise.all([
-    listVersions({ workspaceId, recipeId: recipe.id }),
+  const [{ versions, costsShown }, releases, currency] = await Promise.all([
+    listVersionsForViewer({ viewer, recipe }),
     listReleases({ workspaceId, recipeId: recipe.id }),
     getBaseCurrency({ workspaceId }),
   ]);
@@ -34,7 +34,7 @@ export default async function HistoryPage({ params }: { params: Promise<{ recipe
       <div className="space-y-6">
         {numbers.length >= 2 ? (
           <Card>
-            <CardHeader title="Compare two versions" description="Lines, composition and cost side by side." />
+            <CardHeader title="Compare two versions" description={costsShown ? "Lines, composition and cost side by side." : "Lines and composition side by side."} />
             <CompareForm recipeId={recipe.id} versions={numbers} a={numbers[1]!} b={numbers[0]!} />
           </Card>
         ) : null}
@@ -48,7 +48,7 @@ export default async function HistoryPage({ params }: { params: Promise<{ recipe
                 <Th>Saved</Th>
                 <Th>Note</Th>
                 <Th numeric>Cocoa</Th>
-                <Th numeric>Cost per bar</Th>
+                {costsShown ? <Th numeric>Cost per bar</Th> : null}
                 <Th />
               </tr>
             </thead>
@@ -71,7 +71,7 @@ export default async function HistoryPage({ params }: { params: Promise<{ recipe
                   </Td>
                   <Td className="max-w-xs">{v.note ?? <span className="text-cocoa-300">—</span>}</Td>
                   <Td numeric>{pct(v.cocoaPercent)}</Td>
-                  <Td numeric>{money(v.costPerBar, currency, 3)}</Td>
+                  {costsShown ? <Td numeric>{money(v.costPerBar, currency, 3)}</Td> : null}
                   <Td>
                     {edits ? (
                       <VersionActions

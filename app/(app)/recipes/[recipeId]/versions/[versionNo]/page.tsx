@@ -6,7 +6,7 @@ import { RecipeHeader } from "@/components/recipes/recipe-header";
 import { VersionLinesCard } from "@/components/recipes/version-figures";
 import { AUTHORITIES } from "@/lib/formulation";
 import { getBaseCurrency } from "@/lib/data/exchange-rates";
-import { getVersion } from "@/lib/data/recipes-versions";
+import { getVersionForViewer } from "@/lib/cost-visibility/recipes";
 import { versionNoSchema } from "@/lib/validation/recipes";
 import { loadRecipePage, orNotFound } from "../../load";
 
@@ -21,7 +21,10 @@ export default async function VersionPage({ params }: { params: Promise<{ recipe
   const n = versionNoSchema.safeParse(p.versionNo);
   if (!n.success) notFound();
   const workspaceId = viewer.workspace.id;
-  const [version, currency] = await Promise.all([getVersion({ workspaceId, recipeId: recipe.id, versionNo: n.data }).catch(orNotFound), getBaseCurrency({ workspaceId })]);
+  const [{ version, costsShown }, currency] = await Promise.all([
+    getVersionForViewer({ viewer, recipeId: recipe.id, versionNo: n.data }).catch(orNotFound),
+    getBaseCurrency({ workspaceId }),
+  ]);
   if (!version.released && !readsAll) notFound();
   return (
     <>
@@ -39,7 +42,7 @@ export default async function VersionPage({ params }: { params: Promise<{ recipe
       </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="space-y-6">
-          <VersionLinesCard version={version} currency={currency} />
+          <VersionLinesCard version={version} currency={currency} showCost={costsShown} />
           <StandardsPanel standards={version.evaluation.standards} chosen={AUTHORITIES} chocolateType={recipe.chocolateType} />
         </div>
         <CompositionPanel composition={version.evaluation.composition} />
