@@ -100,6 +100,6 @@ function mapReference(
     return ctx.people.get(value) ?? (notNull ? ctx.importer.id : null);
   }
   const mapped = ctx.idMaps[target]?.get(value);
-  if (!mapped) throw invalid(`${ctx.where} points at a ${target} row that is not in the file. Nothing was imported.`);
+  if (!mapped) throw invalid(`${ctx.where} points at a row of ${target} that is not in the file. Nothing was imported.`);
   return mapped;
 }
