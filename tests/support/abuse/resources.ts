@@ -14,9 +14,8 @@ import { insertTestOrder } from "../purchases";
 
 export type WorkspaceResources = {
   ids: Record<string, string>;
-  /** Files attached to the ingredient and to the supplier (the nested file routes check the owner too). */
-  ingredientFileId: string;
-  supplierFileId: string;
+  /** Files attached to the ingredient, the supplier and the lot (the nested file routes check the owner too). */
+  fileIds: { ingredients: string; suppliers: string; lots: string };
 };
 
 export async function makeWorkspaceResources(team: TeamFixture): Promise<WorkspaceResources> {
@@ -26,10 +25,11 @@ export async function makeWorkspaceResources(team: TeamFixture): Promise<Workspa
   const supplier = await makeSupplier(team.workspaceId);
   const lot = await createTestLot(team.workspaceId);
   const order = await insertTestOrder(team.workspaceId);
-  const attach = (owner: { ingredientId: string } | { supplierId: string }) =>
+  const attach = (owner: { ingredientId: string } | { supplierId: string } | { lotId: string }) =>
     addAttachment({ workspaceId: team.workspaceId, userId: team.people.owner.id, owner, kind: "spec_sheet", fileName: "spec.pdf", bytes: tinyPdf() });
   const ingredientFile = await attach({ ingredientId: ingredient.id });
   const supplierFile = await attach({ supplierId: supplier.id });
+  const lotFile = await attach({ lotId: lot.id });
   return {
     ids: {
       batchId: batch.id,
@@ -43,16 +43,16 @@ export async function makeWorkspaceResources(team: TeamFixture): Promise<Workspa
       machineId: setup.machineId,
       stationId: setup.stationId,
     },
-    ingredientFileId: ingredientFile.id,
-    supplierFileId: supplierFile.id,
+    fileIds: { ingredients: ingredientFile.id, suppliers: supplierFile.id, lots: lotFile.id },
   };
 }
 
-/** The values of a route's params in the given workspace (the file of the route's owner for fileId). */
+/** The values of a route's params in the given workspace (for fileId, a file of the row the route names). */
 export function routeParamValues(pattern: string, params: string[], r: WorkspaceResources): Record<string, string> {
   const out: Record<string, string> = {};
+  const owner = pattern.split("/")[2] as keyof WorkspaceResources["fileIds"];
   for (const p of params) {
-    if (p === "fileId") out[p] = pattern.startsWith("/api/suppliers/") ? r.supplierFileId : r.ingredientFileId;
+    if (p === "fileId") out[p] = r.fileIds[owner] ?? r.fileIds.ingredients;
     else if (r.ids[p]) out[p] = r.ids[p]!;
     else throw new Error(`abuse tests: no resource for route parameter [${p}] of ${pattern}; add one to tests/support/abuse/resources.ts`);
   }
