@@ -6,25 +6,29 @@ import { loadBenchIngredients } from "./recipes-ingredients";
 
 /**
  * The engine's output for a recipe sent to the API. Library ingredients are read
- * with today's profile and price; inline ones are taken as sent (already
- * validated). Percents need not sum to 100: the engine reads them as parts and
- * warns.
+ * with today's profile and price (without the price when `prices` is false: for
+ * those who may not see costs, who then get no cost either); inline ones are
+ * taken as sent (already validated). Percents need not sum to 100: the engine
+ * reads them as parts and warns.
  */
 export async function evaluateRequest({
   workspaceId,
   request,
   on = new Date(),
+  prices = true,
 }: {
   workspaceId: string;
   request: EvaluateRequest;
   on?: Date;
+  prices?: boolean;
 }): Promise<{ evaluation: Evaluation; cost?: CostResult }> {
   const ids = request.lines.flatMap((l) => ("ingredientId" in l ? [l.ingredientId] : []));
   const library = await loadBenchIngredients({ workspaceId, ingredientIds: ids, on });
   const lines: RecipeLine[] = request.lines.map((l) => {
-    const ingredient: IngredientSpec = "ingredientId" in l ? toIngredientSpec(library.get(l.ingredientId)!) : l.ingredient;
+    const ingredient: IngredientSpec =
+      "ingredientId" in l ? toIngredientSpec({ ...library.get(l.ingredientId)!, ...(prices ? {} : { pricePerKg: null }) }) : l.ingredient;
     return { ingredient, percent: l.percent };
   });
   const evaluation = evaluateRecipe({ lines }, request.authorities ? { authorities: request.authorities } : undefined);
-  return request.barMassGrams ? { evaluation, cost: costRecipe(lines, { barMassGrams: request.barMassGrams }) } : { evaluation };
+  return request.barMassGrams && prices ? { evaluation, cost: costRecipe(lines, { barMassGrams: request.barMassGrams }) } : { evaluation };
 }

@@ -1,11 +1,16 @@
 import { beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { loadBenchData } from "@/app/(app)/recipes/[recipeId]/bench-data";
+import { GET as getVersionRoute } from "@/app/api/recipes/[recipeId]/versions/[versionRef]/route";
+import { POST as evaluateRoute } from "@/app/api/recipes/evaluate/route";
 import { getViewer } from "@/lib/auth/current";
 import { setShowCostsToAll } from "@/lib/data/cost-visibility";
 import { getRecipe } from "@/lib/data/recipes";
+import { saveRecipeVersion } from "@/lib/data/recipes-save";
 import { costedRecipe } from "../support/costing";
 import { createTeam, signInAs, type TeamFixture } from "../support/fixtures";
 import { createTestLot } from "../support/lots";
+import { darkLines } from "../support/recipe-fixtures";
+import { base, jsonRequest, params } from "../support/matrix";
 import { freshRequest } from "../support/request";
 
 let team: TeamFixture;
@@ -18,6 +23,9 @@ beforeAll(async () => {
   const costed = await costedRecipe(team);
   recipeId = costed.recipeId;
   nibsId = costed.ids.nibs;
+  // A version saved now that the quotes exist, so it keeps their prices.
+  const { latestVersionNo } = await getRecipe({ workspaceId: team.workspaceId, recipeId });
+  await saveRecipeVersion({ workspaceId: team.workspaceId, authorId: team.people.formulator.id, recipeId, baseVersionNo: latestVersionNo, barMassGrams: "70", lines: darkLines(costed.ids, "64") });
   // 100 kg of beans for 500 EUR, nothing processed yet: nibs estimated at the workspace's 78 % = 78 kg → 500 / 78 = 6.4102564… EUR/kg.
   lotId = (await createTestLot(team.workspaceId)).id;
 });
@@ -57,5 +65,36 @@ describe("the bench page's data", () => {
     expect(data.library.find((i) => i.id === nibsId)?.pricePerKg).toMatch(/^16\.2/);
     expect(data.lotSources.map((s) => s.lotId)).toContain(lotId);
     await setShowCostsToAll({ workspaceId: team.workspaceId, show: false });
+  });
+});
+
+describe("the bench's JSON routes", () => {
+  const latest = async () => (await getVersionRoute(new Request(`${base}/api/recipes/${recipeId}/versions/latest`), params({ recipeId, versionRef: "latest" }))).json();
+  const evaluate = async () =>
+    (await evaluateRoute(jsonRequest("POST", "/api/recipes/evaluate", { lines: [{ ingredientId: nibsId, percent: "100" }], barMassGrams: "70" }), params())).json();
+  type VersionJson = { recipe: { costPerBar: string | null }; version: { costPerBar: string | null; lines: { pricePerKg: string | null }[] } };
+  type EvaluateJson = { evaluation: { costPerKg?: string }; cost?: unknown };
+
+  it("give a formulator the version's prices and an evaluation's cost", async () => {
+    await signInAs(team.people.formulator.id, team.workspaceId);
+    const { version } = (await latest()) as VersionJson;
+    // The fixture's preferred sugar quote has expired, so the version has line prices but no total.
+    expect(version.lines.some((l) => l.pricePerKg !== null)).toBe(true);
+    const ev = (await evaluate()) as EvaluateJson;
+    expect(ev.evaluation.costPerKg).toMatch(/^16\.2/);
+    expect(ev.cost).toBeDefined();
+  });
+
+  it("give a viewer the version and the evaluation without a price or a cost", async () => {
+    await setShowCostsToAll({ workspaceId: team.workspaceId, show: false });
+    await signInAs(team.people.viewer.id, team.workspaceId);
+    const body = (await latest()) as VersionJson;
+    expect(body.version.lines.length).toBeGreaterThan(0);
+    expect(body.version.lines.every((l) => l.pricePerKg === null)).toBe(true);
+    expect([body.version.costPerBar, body.recipe.costPerBar]).toEqual([null, null]);
+    const ev = (await evaluate()) as EvaluateJson;
+    expect(ev.evaluation.costPerKg).toBeUndefined();
+    expect(ev.cost).toBeUndefined();
+    expect(JSON.stringify(ev)).not.toMatch(/16\.2/);
   });
 });
