@@ -1,6 +1,8 @@
 import "server-only";
 import { asc, and, eq, gt, inArray, isNotNull } from "drizzle-orm";
-import { db } from "@/db/client";
+import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
+import { pool } from "@/db/client";
+import * as schema from "@/db/schema";
 import { attachments, memberships, users, workspaces } from "@/db/schema";
 import { notFound } from "@/lib/errors";
 import { readStoredFile } from "./files";
@@ -17,22 +19,35 @@ const PAGE = 1000;
  * are referenced by storage key and SHA-256 (an import on this same server
  * copies them). Password hashes, sessions and tokens are never read.
  */
-export async function* exportWorkspaceChunks({
-  workspaceId,
-  includeFiles,
-}: {
-  workspaceId: string;
-  includeFiles: boolean;
-}): AsyncGenerator<string> {
+export async function* exportWorkspaceChunks(opts: { workspaceId: string; includeFiles: boolean }): AsyncGenerator<string> {
+  // One snapshot for the whole document, so rows written meanwhile cannot leave
+  // a line without its version (the import would refuse the file).
+  const client = await pool.connect();
+  let finished = false;
+  try {
+    await client.query("begin isolation level repeatable read read only");
+    yield* writeDocument(drizzle(client, { schema }), opts);
+    await client.query("commit");
+    finished = true;
+  } finally {
+    // Also reached when the download is abandoned half-way.
+    if (!finished) await client.query("rollback").catch(() => undefined);
+    client.release();
+  }
+}
+
+type Snapshot = NodePgDatabase<typeof schema>;
+
+async function* writeDocument(db: Snapshot, { workspaceId, includeFiles }: { workspaceId: string; includeFiles: boolean }): AsyncGenerator<string> {
   const [workspace] = await db.select().from(workspaces).where(eq(workspaces.id, workspaceId));
   if (!workspace) throw notFound("That workspace");
   const kept = Object.fromEntries(workspaceTable.columns.map((c) => [c.key, (workspace as Row)[c.key]]));
   const header = { format: TRANSFER_FORMAT, schemaVersion: SCHEMA_VERSION, exportedAt: new Date().toISOString() };
-  yield `${JSON.stringify(header).slice(0, -1)},"workspace":${JSON.stringify(kept)},"people":${JSON.stringify(await listPeople(workspaceId))},"tables":{`;
+  yield `${JSON.stringify(header).slice(0, -1)},"workspace":${JSON.stringify(kept)},"people":${JSON.stringify(await listPeople(db, workspaceId))},"tables":{`;
   for (const [i, table] of EXPORTED_TABLES.entries()) {
     yield `${i === 0 ? "" : ","}${JSON.stringify(table.name)}:[`;
     let first = true;
-    for await (const rows of pagesOf(table, workspaceId)) {
+    for await (const rows of pagesOf(db, table, workspaceId)) {
       for (const row of rows) {
         yield `${first ? "" : ","}${JSON.stringify(row)}`;
         first = false;
@@ -68,7 +83,7 @@ export async function exportWorkspace(opts: { workspaceId: string; includeFiles:
 }
 
 /** A table's rows of the workspace, a page at a time, in primary-key order. */
-async function* pagesOf(table: TableInfo, workspaceId: string): AsyncGenerator<Row[]> {
+async function* pagesOf(db: Snapshot, table: TableInfo, workspaceId: string): AsyncGenerator<Row[]> {
   const keys = table.primaryKey.map((k) => columnOf(table, k));
   const where = scopeWhere(table, workspaceId);
   if (keys.length === 1) {
@@ -96,7 +111,7 @@ async function* pagesOf(table: TableInfo, workspaceId: string): AsyncGenerator<R
  * The workspace's members with their roles, and anyone else its rows name as
  * an author (role null: they have left). Names and e-mails only.
  */
-async function listPeople(workspaceId: string): Promise<Person[]> {
+async function listPeople(db: Snapshot, workspaceId: string): Promise<Person[]> {
   const members = await db
     .select({ id: users.id, name: users.name, email: users.email, role: memberships.role })
     .from(memberships)

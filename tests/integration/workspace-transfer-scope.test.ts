@@ -2,7 +2,7 @@ import { eq, inArray } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { recipeVersionLines, recipeVersions } from "@/db/schema";
-import { exportWorkspace } from "@/lib/workspace-transfer/export";
+import { exportWorkspace, exportWorkspaceChunks } from "@/lib/workspace-transfer/export";
 import { EXPORTED_TABLES } from "@/lib/workspace-transfer/tables";
 import { createTeam, type TeamFixture } from "../support/fixtures";
 import { makeIngredient, makeSupplier } from "../support/ingredients";
@@ -46,5 +46,15 @@ describe("a workspace export", () => {
     const lines = await db.select({ id: recipeVersionLines.id }).from(recipeVersionLines).where(inArray(recipeVersionLines.versionId, versions.map((v) => v.id)));
     expect(lines.length).toBeGreaterThan(0);
     expect(doc.tables.recipe_version_lines!.map((r) => r.id).sort()).toEqual(lines.map((l) => l.id).sort());
+  });
+
+  it("gives its database connection back when a download is abandoned half-way", async () => {
+    // More abandoned downloads than the pool has connections (10): a leak would hang the last export.
+    for (let i = 0; i < 12; i++) {
+      const chunks = exportWorkspaceChunks({ workspaceId: mine.workspaceId, includeFiles: true });
+      await chunks.next();
+      await chunks.return(undefined);
+    }
+    expect(JSON.parse(await exportWorkspace({ workspaceId: mine.workspaceId, includeFiles: true }))).toHaveProperty("tables");
   });
 });
