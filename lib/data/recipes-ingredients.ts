@@ -9,6 +9,7 @@ import { referenceIngredientRow } from "@/lib/ingredients/reference-rows";
 import { isoDay } from "@/lib/pricing/convert";
 import type { BenchIngredient } from "@/lib/recipes/types";
 import type { Executor } from "./recipes-db";
+import { loadPricedIngredients } from "./priced-ingredients";
 import { currentPricesFor } from "./recipes-prices";
 import { ingredientsInTransaction } from "./recipes-rows";
 
@@ -80,13 +81,10 @@ export async function loadBenchIngredients({
   executor?: Executor;
 }): Promise<Map<string, BenchIngredient>> {
   const ids = [...new Set(ingredientIds)];
+  // One round trip: this runs on every evaluate and save.
   const found =
     executor === db
-      ? await (async () => {
-          const rows = ids.length ? await selectIngredients(executor, workspaceId, ids) : [];
-          const prices = await currentPricesFor({ workspaceId, ingredientIds: ids, on });
-          return new Map(rows.map((r) => [r.id, toBench(r, prices)]));
-        })()
+      ? await loadPricedIngredients({ workspaceId, ingredientIds: ids, on: isoDay(on) })
       : await ingredientsInTransaction(executor as DemoContext["tx"], { workspaceId, ingredientIds: ids, on: isoDay(on) });
   if (found.size !== ids.length) throw invalid("One of the ingredients is not in this workspace's library any more.", { lines: ["Unknown ingredient."] });
   return found;
