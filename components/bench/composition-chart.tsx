@@ -1,7 +1,7 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { memo } from "react";
-import { Bar, BarChart, Cell, ResponsiveContainer, XAxis, YAxis } from "recharts";
 import type { CompositionFigures } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
 
@@ -20,10 +20,13 @@ const MIX_PARTS = [
 
 const ROW_HEIGHT = 22;
 
+// Recharts is the largest script of the bench: it loads after the first paint, into a box
+// already at its final height (no layout shift); the figures beside it never wait for it.
+const CompositionBars = dynamic(() => import("./composition-bars"), { ssr: false });
+
 /**
- * One bar per part of the finished product (parts at 0 are left out). One Recharts
- * series with a colour per bar: a single series redraws several times faster than
- * a stack of nine. Every figure shown as text comes from the engine's strings.
+ * One bar per part of the finished product (parts at 0 are left out), drawn by
+ * composition-bars.tsx. Every figure shown as text comes from the engine's strings.
  */
 export const CompositionChart = memo(function CompositionChart({ composition }: { composition: CompositionFigures }) {
   // Numbers only for drawing lengths.
@@ -31,17 +34,7 @@ export const CompositionChart = memo(function CompositionChart({ composition }: 
   const summary = rows.map((r) => `${r.label} ${pct(composition[r.key])}`).join(", ");
   return (
     <div role="img" aria-label={`The mix: ${summary}`} style={{ height: rows.length * ROW_HEIGHT + 4 }} className="w-full">
-      <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={rows} layout="vertical" margin={{ top: 2, right: 4, bottom: 2, left: 0 }} barCategoryGap={4}>
-          <XAxis type="number" domain={[0, 100]} hide />
-          <YAxis type="category" dataKey="label" width={128} tickLine={false} axisLine={false} tick={{ fontSize: 12, fill: "#6E5647" }} interval={0} />
-          <Bar dataKey="value" isAnimationActive={false} radius={3}>
-            {rows.map((r) => (
-              <Cell key={r.key} fill={r.colour} />
-            ))}
-          </Bar>
-        </BarChart>
-      </ResponsiveContainer>
+      <CompositionBars rows={rows} />
     </div>
   );
 });
