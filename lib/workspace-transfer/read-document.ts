@@ -37,7 +37,14 @@ export function readExportDocument(bytes: Uint8Array): ExportDocument {
   if (!SUPPORTED_SCHEMA_VERSIONS.includes(head.schemaVersion)) {
     throw invalid(`This export uses format version ${head.schemaVersion}, which this Barwright no longer reads. Export the workspace again from its server.`);
   }
-  const parsed = exportDocumentSchema.safeParse(raw);
+  let parsed: ReturnType<typeof exportDocumentSchema.safeParse>;
+  try {
+    parsed = exportDocumentSchema.safeParse(raw);
+  } catch (err) {
+    // JSON nested thousands of levels deep (never written by an export) exhausts the stack.
+    if (err instanceof RangeError) throw invalid("The export is damaged or was edited: it nests values far deeper than an export does. Nothing was imported.");
+    throw err;
+  }
   if (!parsed.success) {
     const problems = parsed.error.issues.slice(0, 5).map(describeIssue);
     throw invalid(`The export is damaged or was edited, so nothing was imported. ${problems.join(" ")}`, { file: problems });

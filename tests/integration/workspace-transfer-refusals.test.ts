@@ -71,6 +71,8 @@ describe("importing a file that is not a usable export", () => {
     await expectRefused(edited((d) => Object.assign(d.tables.recipes![0]!, { colour: "brown" })), /recipes › row 1/);
     await expectRefused(edited((d) => delete (d.tables as Record<string, unknown>).machines), /machines/);
     await expectRefused(edited((d) => Object.assign(d.tables.ingredients![0]!, { sugar: "12345.5" })), /ingredients › row 1 › sugar: Too many digits/);
+    const deep = "[".repeat(200_000) + "]".repeat(200_000);
+    await expectRefused(edited((d) => Object.assign(d.tables.recipe_versions![0]!, { evaluation: "DEEP" })).replace('"DEEP"', deep), /nests values far deeper than an export does/);
   });
 
   it("refuses a broken reference between rows, and rows of another workspace", async () => {
