@@ -18,7 +18,12 @@ export default async function setup() {
   rmSync(fakeS3s.e2e.dir, { recursive: true, force: true });
   const s3 = await startFakeS3(fakeS3s.e2e);
   const storage = { BARWRIGHT_S3_ENDPOINT: `http://127.0.0.1:${fakeS3s.e2e.port}`, BARWRIGHT_S3_BUCKET: fakeS3s.e2e.bucket };
-  execFileSync("npx", ["tsx", "scripts/seed.ts"], { env: { ...clusterEnv("e2e"), ...storage }, stdio: "inherit" });
+  // Not execFileSync: the fake S3 runs in this process and must keep answering while the seed stores its file.
+  await new Promise<void>((resolve, reject) => {
+    const seed = spawn("npx", ["tsx", "scripts/seed.ts"], { env: { ...clusterEnv("e2e"), ...storage }, stdio: "inherit" });
+    seed.on("error", reject);
+    seed.on("exit", (code) => (code === 0 ? resolve() : reject(new Error(`e2e: the demo seed failed (exit ${code})`))));
+  });
   rmSync(mailSinks.e2e.dir, { recursive: true, force: true });
   const sink = await startMailSink(mailSinks.e2e);
   const env = {
