@@ -1,5 +1,6 @@
 import type { Page } from "playwright-core";
 import { E2E_BASE_URL } from "../config";
+import { moneyIn } from "./money";
 
 /** A bean lot's page: the chain, the nib cost and the record forms. */
 export class LotPage {
@@ -30,6 +31,11 @@ export class LotPage {
 
   nibCost() {
     return this.page.getByTestId("nib-cost").textContent();
+  }
+
+  /** Money figures ("EUR 12.83") anywhere in the page's main area; empty when none is shown. */
+  async moneyShown(): Promise<string[]> {
+    return moneyIn(await this.page.locator("main").innerText());
   }
 
   cumulativeYield() {

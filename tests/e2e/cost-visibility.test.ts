@@ -1,0 +1,68 @@
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { launchBrowser } from "./browser";
+import { E2E_BASE_URL } from "./config";
+import { MoneyPages } from "./pages/money-pages";
+import { SignInPage } from "./pages/sign-in-page";
+
+let context: BrowserContext;
+let page: Page;
+
+beforeAll(async () => {
+  context = await launchBrowser();
+  page = context.pages()[0] ?? (await context.newPage());
+});
+afterAll(async () => {
+  await context?.close();
+});
+
+async function signInAs(email: string) {
+  await context.clearCookies();
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.signIn(email);
+  await page.waitForURL(`${E2E_BASE_URL}/overview`);
+}
+
+const costingLink = () => page.getByRole("navigation", { name: "Sections" }).getByRole("link", { name: "Costing" });
+
+// Demo lot EC-2026-07 and the demo ingredient prices are invented (db/demo/lots.ts, db/demo/ingredients.ts).
+describe("money for production", () => {
+  it("is hidden until the owner shares costs, then shown, then hidden again", async () => {
+    const pages = new MoneyPages(page);
+    try {
+      await signInAs("joss@fenwicklane.example");
+      expect(await costingLink().count()).toBe(0);
+      const ingredients = await pages.ingredientList();
+      expect(ingredients.headers.join("|")).not.toContain("Current price");
+      expect(ingredients.headers.join("|")).toContain("Preferred supplier");
+      expect(ingredients.money).toEqual([]);
+      expect(await pages.lot("EC-2026-07")).toEqual({ nibCost: 0, money: [] });
+      const recipes = await pages.recipeList();
+      expect(recipes.headers.join("|")).not.toContain("Cost per bar");
+      expect(recipes.headers.join("|")).toContain("Cocoa");
+      expect(recipes.money).toEqual([]);
+
+      await signInAs("mara@fenwicklane.example");
+      await pages.shareCosts(true);
+
+      await signInAs("joss@fenwicklane.example");
+      expect(await costingLink().count()).toBe(1);
+      const pricedIngredients = await pages.ingredientList();
+      expect(pricedIngredients.headers.join("|")).toContain("Current price");
+      expect(pricedIngredients.money.length).toBeGreaterThan(0);
+      const lot = await pages.lot("EC-2026-07");
+      expect(lot.nibCost).toBe(1);
+      expect(lot.money.length).toBeGreaterThan(0);
+      const pricedRecipes = await pages.recipeList();
+      expect(pricedRecipes.headers.join("|")).toContain("Cost per bar");
+      expect(pricedRecipes.money.length).toBeGreaterThan(0);
+    } finally {
+      // Later browser tests share the demo workspace and expect costs kept from production.
+      await signInAs("mara@fenwicklane.example");
+      await pages.shareCosts(false);
+    }
+    await signInAs("joss@fenwicklane.example");
+    expect((await pages.ingredientList()).money).toEqual([]);
+  });
+});
