@@ -14,6 +14,5 @@ export const navItems: ReadonlyArray<{ href: string; label: string; permission: 
   { href: "/costing", label: "Costing", permission: "workspace.read", costs: true },
   { href: "/batches", label: "Batches", permission: "batches.read" },
   { href: "/settings/members", label: "Team", permission: "workspace.read" },
-  { href: "/settings/workspace", label: "Workspace", permission: "workspace.export" },
   { href: "/settings/mailbox", label: "Mailbox", permission: "members.manage", demoOnly: true },
 ];

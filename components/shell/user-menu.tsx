@@ -4,8 +4,10 @@ import * as Menu from "@radix-ui/react-dropdown-menu";
 import Link from "next/link";
 import { useTransition } from "react";
 import { signOutAction } from "@/app/(app)/actions";
+import type { Role } from "@/db/schema";
+import { can } from "@/lib/auth/permissions";
 
-export function UserMenu({ name, email, role }: { name: string; email: string; role: string }) {
+export function UserMenu({ name, email, role }: { name: string; email: string; role: Role }) {
   const [signingOut, startSignOut] = useTransition();
   const initials = name
     .split(/\s+/)
@@ -34,6 +36,14 @@ export function UserMenu({ name, email, role }: { name: string; email: string; r
               Your account
             </Link>
           </Menu.Item>
+          {/* Kept out of the section bar, which is full once the workspace menu shows. */}
+          {can(role, "workspace.export") ? (
+            <Menu.Item asChild>
+              <Link href="/settings/workspace" className="block rounded-md px-3 py-2 text-sm outline-none data-[highlighted]:bg-cream-deep">
+                Workspace: backup and move
+              </Link>
+            </Menu.Item>
+          ) : null}
           <Menu.Item
             disabled={signingOut}
             onSelect={() => startSignOut(() => signOutAction())}

@@ -31,7 +31,7 @@ describe("backup and move", () => {
     await page.waitForURL(`${E2E_BASE_URL}/overview`);
 
     const settings = new WorkspacePage(page);
-    await settings.open();
+    await settings.openFromMenu();
     const file = await settings.download();
     expect(file.name).toMatch(/^barwright-fenwick-lane-chocolate-works-\d{4}-\d{2}-\d{2}\.json$/);
     const doc = JSON.parse(readFileSync(file.path, "utf8")) as { format: string; tables: { recipes: { name: string }[] } };

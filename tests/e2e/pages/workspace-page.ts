@@ -10,6 +10,14 @@ export class WorkspacePage {
     await this.page.getByTestId("backup-and-move").waitFor();
   }
 
+  /** The way an owner finds it: the account menu under their initials. */
+  async openFromMenu() {
+    await this.page.getByRole("button", { name: /Account menu/ }).click();
+    await this.page.getByRole("menuitem", { name: "Workspace: backup and move" }).click();
+    await this.page.waitForURL(`${E2E_BASE_URL}/settings/workspace`);
+    await this.page.getByTestId("backup-and-move").waitFor();
+  }
+
   /** Clicks "Download with files" and returns the saved file's path and suggested name. */
   async download(): Promise<{ path: string; name: string }> {
     const [download] = await Promise.all([
