@@ -21,6 +21,7 @@ import { SaveBar } from "./save-bar";
 import type { Fixer } from "./standard-category";
 import { StandardsPanel } from "./standards-panel";
 import { TargetPanel } from "./target-panel";
+import { LeastCostPanel } from "@/components/least-cost/least-cost-panel";
 import { useAfterPaint } from "./use-after-paint";
 import { useChosenAuthorities } from "./use-chosen-authorities";
 import { clearLocalDraft, readLocalDraft, useLocalDraft, type StoredDraft } from "./use-local-draft";
@@ -187,6 +188,9 @@ export function Bench({ recipe, base, library, currency, canEdit, showCosts, lot
         ) : null}
         {canEdit && state.lines.length >= 2 ? (
           <TargetPanel ingredients={lineIngredients} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
+        ) : null}
+        {canEdit && state.lines.length >= 2 ? (
+          <LeastCostPanel lines={deferredLines} locked={deferredLocked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />
         ) : null}
       </div>
       {theirs ? (

@@ -1,39 +1,64 @@
 "use client";
 
+import Decimal from "decimal.js";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Table, Td, Th } from "@/components/ui/table";
-import type { CategoryRef, LeastCostResult, LeastCostSolution } from "@/lib/formulation";
-import { money, pct, signed } from "@/lib/recipes/format";
+import { formatPercent, type CategoryRef, type LeastCostResult, type LeastCostSolution } from "@/lib/formulation";
+import { money, signed } from "@/lib/recipes/format";
 
-function Comparison({ solution, currency }: { solution: LeastCostSolution; currency: string }) {
+const tight = "px-2";
+
+/** The proposal beside the current mix, narrow enough for the bench's side column. */
+function Comparison({ solution, currency, decimals }: { solution: LeastCostSolution; currency: string; decimals: number }) {
+  const difference = solution.saving === undefined ? undefined : new Decimal(solution.saving).negated().toFixed();
   return (
-    <Table data-testid="least-cost-proposal">
-      <thead>
-        <tr>
-          <Th>Line</Th>
-          <Th numeric>Now</Th>
-          <Th numeric>Proposed</Th>
-          <Th numeric>Change</Th>
-        </tr>
-      </thead>
-      <tbody>
-        {solution.lines.map((line) => (
-          <tr key={line.index}>
-            <Td>{line.name}</Td>
-            <Td numeric>{pct(line.currentPercent, 2)}</Td>
-            <Td numeric>{pct(line.percent, 2)}</Td>
-            <Td numeric>{signed(line.change, 2)}</Td>
+    <div className="space-y-2">
+      <Table data-testid="least-cost-proposal">
+        <thead>
+          <tr>
+            <Th className={tight}>Line</Th>
+            <Th numeric className={tight}>
+              Now %
+            </Th>
+            <Th numeric className={tight}>
+              Proposed %
+            </Th>
+            <Th numeric className={tight}>
+              Change
+            </Th>
           </tr>
-        ))}
-        <tr>
-          <Td className="font-semibold">Ingredient cost per kg</Td>
-          <Td numeric>{money(solution.currentCostPerKg, currency)}</Td>
-          <Td numeric data-testid="least-cost-cost">{money(solution.costPerKg, currency)}</Td>
-          <Td numeric data-testid="least-cost-saving">{solution.saving === undefined ? "—" : signed(String(-Number(solution.saving)), 2)}</Td>
-        </tr>
-      </tbody>
-    </Table>
+        </thead>
+        <tbody>
+          {solution.lines.map((line) => (
+            <tr key={line.index}>
+              <Td className={`${tight} break-words`}>{line.name}</Td>
+              <Td numeric className={tight}>
+                {formatPercent(line.currentPercent, decimals) ?? "—"}
+              </Td>
+              <Td numeric className={`${tight} font-semibold`}>
+                {formatPercent(line.percent, decimals) ?? "—"}
+              </Td>
+              <Td numeric className={tight}>
+                {signed(line.change, decimals)}
+              </Td>
+            </tr>
+          ))}
+        </tbody>
+      </Table>
+      <dl className="grid grid-cols-[1fr_auto] gap-x-3 gap-y-0.5 text-sm">
+        <dt className="text-cocoa-500">Ingredient cost per kg now</dt>
+        <dd className="figures text-right">{money(solution.currentCostPerKg, currency)}</dd>
+        <dt className="text-cocoa-500">Proposed</dt>
+        <dd className="figures text-right font-semibold" data-testid="least-cost-cost">
+          {money(solution.costPerKg, currency)}
+        </dd>
+        <dt className="text-cocoa-500">Difference per kg</dt>
+        <dd className="figures text-right" data-testid="least-cost-saving">
+          {difference === undefined ? "—" : `${signed(difference, 2)} ${currency}`}
+        </dd>
+      </dl>
+    </div>
   );
 }
 
@@ -42,11 +67,14 @@ export function LeastCostResultView({
   result,
   categories,
   currency,
+  decimals,
   onApply,
 }: {
   result: LeastCostResult;
   categories: CategoryRef[];
   currency: string;
+  /** Decimals of the bench's grid step. */
+  decimals: number;
   onApply: (percents: string[]) => void;
 }) {
   if (!result.ok) {
@@ -71,7 +99,7 @@ export function LeastCostResultView({
   const chosen = result.evaluation.standards.filter((s) => categories.some((c) => c.authority === s.authority && c.category === s.category));
   return (
     <div className="space-y-3" data-testid="least-cost-result">
-      <Comparison solution={result} currency={currency} />
+      <Comparison solution={result} currency={currency} decimals={decimals} />
       <div className="flex flex-wrap gap-2" data-testid="least-cost-standards">
         {chosen.map((s) => (
           <Badge key={`${s.authority} ${s.category}`} tone={s.pass ? "meets" : "short"}>

@@ -33,7 +33,7 @@ export function LeastCostSettingsForm({
     <div className="space-y-3">
       <fieldset>
         <legend className="text-sm font-semibold text-cocoa-700">Must meet</legend>
-        <div className="mt-1 grid gap-1 sm:grid-cols-2">
+        <div className="mt-1 grid gap-1 @sm:grid-cols-2">
           {categories.map((c) => {
             const key = categoryKey(c);
             return (
@@ -45,7 +45,7 @@ export function LeastCostSettingsForm({
           })}
         </div>
       </fieldset>
-      <div className="grid gap-3 sm:grid-cols-2">
+      <div className="grid gap-3 @sm:grid-cols-2">
         <Field id="least-cost-target-mode" label="Total dry cocoa solids (EU basis)">
           <Select id="least-cost-target-mode" ariaLabel="Cocoa target" value={settings.targetMode} onValueChange={(v) => onChange({ ...settings, targetMode: v as LeastCostSettings["targetMode"] })} options={TARGET_MODES} />
         </Field>

@@ -2,12 +2,14 @@
  * Barwright's Content-Security-Policy. Scripts need this request's nonce
  * ('strict-dynamic' lets Next.js's own chunks load); styles allow inline
  * attributes because server-rendered charts and popovers carry style="…"
- * (a style cannot run code). Nothing may frame the app.
+ * (a style cannot run code). Nothing may frame the app. 'wasm-unsafe-eval' lets
+ * pages compile WebAssembly (the bench's least-cost solver, HiGHS) and nothing
+ * else: JavaScript eval stays refused outside development.
  */
 export function contentSecurityPolicy(nonce: string, opts: { dev: boolean; https: boolean }): string {
   const directives = [
     "default-src 'self'",
-    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${opts.dev ? " 'unsafe-eval'" : ""}`,
+    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic' 'wasm-unsafe-eval'${opts.dev ? " 'unsafe-eval'" : ""}`,
     "style-src 'self' 'unsafe-inline'",
     "img-src 'self' blob: data:",
     "font-src 'self'",
