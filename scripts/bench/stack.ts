@@ -5,6 +5,7 @@
  * BARWRIGHT_TEST_SLOT like the tests' (tests/support/slot.ts).
  */
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { readFileSync, writeFileSync } from "node:fs";
 import { E2E_DIST_DIR } from "../../tests/e2e/config";
 import { slot, slotDir, slotPort } from "../../tests/support/slot";
 
@@ -60,12 +61,16 @@ export function buildApp(stack: Stack): void {
   }
   console.log(`bench: building the production app into ${E2E_DIST_DIR}…`);
   const t = Date.now();
+  // A build into another folder adds that folder's types to tsconfig.json: put it back as it was.
+  const tsconfig = readFileSync("tsconfig.json", "utf8");
   try {
     execFileSync("node", ["node_modules/next/dist/bin/next", "build"], { env: stack.env, stdio: "pipe", encoding: "utf8" });
   } catch (err) {
     const e = err as { stdout?: string; stderr?: string };
     console.error(`${e.stdout ?? ""}${e.stderr ?? ""}`);
     throw new Error("bench: next build failed (output above)");
+  } finally {
+    if (readFileSync("tsconfig.json", "utf8") !== tsconfig) writeFileSync("tsconfig.json", tsconfig);
   }
   console.log(`bench: built in ${((Date.now() - t) / 1000).toFixed(0)} s`);
 }
