@@ -4,11 +4,13 @@
  * counts as "forbidden" (a 200 without any price), a leak fails as "leak".
  * Rights: the issue's rule ("production and viewer do not see prices unless
  * the owner allows it", a workspace setting) — product rule, no outside source.
- * Price-only routes (quotes, their CSV, current prices) are in
- * matrix-ingredients.test.ts with the costs.read right they now need.
+ * Price-only routes (quotes, their CSV, current prices, the least-cost mix)
+ * are in matrix-ingredients.test.ts and matrix-least-cost.test.ts with the
+ * costs.read right they need while costs are not shared; here, shared.
  */
 import { GET as getIngredients } from "@/app/api/ingredients/route";
 import { GET as getLot } from "@/app/api/lots/[lotId]/route";
+import { POST as postLeastCost } from "@/app/api/least-cost/route";
 import { GET as getLots } from "@/app/api/lots/route";
 import { GET as getCurrentPrices } from "@/app/api/prices/current/route";
 import { GET as exportQuotes } from "@/app/api/quotes/export/route";
@@ -18,7 +20,8 @@ import type { Permission } from "@/lib/auth/permissions";
 import { setShowCostsToAll } from "@/lib/data/cost-visibility";
 import { createTestLot } from "../support/lots";
 import { makeIngredient } from "../support/ingredients";
-import { base, fromStatus, params, runMatrix, type MatrixContext, type MatrixRow, type Outcome } from "../support/matrix";
+import { referenceIds } from "../support/recipe-fixtures";
+import { base, fromStatus, jsonRequest, params, runMatrix, type MatrixContext, type MatrixRow, type Outcome } from "../support/matrix";
 
 const get = (path: string) => new Request(`${base}${path}`);
 
@@ -110,6 +113,17 @@ function rows(shared: boolean): MatrixRow[] {
       : []),
     ...(shared
       ? [
+          {
+            name: "POST /api/least-cost",
+            permission: "recipes.read",
+            outsider: "ok", // solves with the caller's own library
+            run: async (ctx: MatrixContext) => {
+              await prepare(ctx);
+              const ids = await referenceIds(ctx.caller === "outsider" ? ctx.other.workspaceId : ctx.team.workspaceId);
+              const request = { lines: [{ ingredientId: ids.nibs, percent: "70" }, { ingredientId: ids.sugar, percent: "30" }] };
+              return fromStatus((await postLeastCost(jsonRequest("POST", "/api/least-cost", request), params())).status);
+            },
+          } satisfies MatrixRow,
           {
             name: "GET /api/prices/current",
             permission: "ingredients.read",

@@ -24,7 +24,9 @@ async function darkRequest(workspaceId: string) {
 const rows: MatrixRow[] = [
   {
     name: "POST /api/least-cost",
-    permission: "recipes.read",
+    // recipes.read, narrowed to those who may see costs (the cheapest mix is a price; lib/auth/costs.ts):
+    // costs.read while the owner has not shared costs (the shared case: matrix-cost-visibility.test.ts).
+    permission: "costs.read",
     outsider: "ok", // computes with the caller's own library; nothing of the team's is read
     run: async ({ team, other, caller }: MatrixContext) => {
       const workspaceId = caller === "outsider" ? other.workspaceId : team.workspaceId;
