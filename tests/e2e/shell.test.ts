@@ -25,6 +25,7 @@ describe("the signed-out landing page", () => {
     await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toMatch(/bean lot to bar label/);
     expect(await page.getByText("Tune a recipe and know what is in it").count()).toBe(1);
     expect(await page.getByRole("link", { name: "Sign in to your workspace" }).getAttribute("href")).toBe("/sign-in");
+    expect(await page.getByRole("link", { name: "Sign in", exact: true }).getAttribute("href")).toBe("/sign-in");
   });
 });
 
@@ -58,6 +59,11 @@ describe("the signed-in shell", () => {
     for (const person of DEMO_PEOPLE) {
       expect(await page.getByRole("cell", { name: person.name }).count()).toBe(1);
     }
+    // Back on the public landing page, the header leads into the workspace instead of offering sign-in again.
+    await page.goto(E2E_BASE_URL);
+    expect(await page.getByRole("link", { name: `Open ${DEMO_WORKSPACE.name}` }).getAttribute("href")).toBe("/overview");
+    expect(await page.getByRole("link", { name: "Sign in", exact: true }).count()).toBe(0);
+    await page.goto(`${E2E_BASE_URL}/overview`);
     const cookie = (await context.cookies()).find((c) => c.name === "barwright_session");
     expect(cookie?.httpOnly).toBe(true);
     expect(cookie?.sameSite).toBe("Lax");
