@@ -17,7 +17,7 @@ export async function AppHeader({ viewer }: { viewer: Viewer }) {
   const workspaces = await listMembershipsForUser({ userId: viewer.user.id });
   return (
     <header className="border-b border-sand bg-white/70 backdrop-blur">
-      <div className="mx-auto flex max-w-page items-center gap-8 px-gutter py-3">
+      <div className="mx-auto flex max-w-page items-center gap-6 px-gutter py-3">
         <Wordmark href="/overview" />
         <NavLinks items={items} />
         <div className="ml-auto flex items-center gap-4">
