@@ -63,4 +63,27 @@ export class BenchPage {
   conflict() {
     return this.page.getByTestId("conflict-dialog");
   }
+
+  /** Opens a recipe's bench from the recipe list by its name. */
+  async openByName(name: string) {
+    await this.page.goto(`${E2E_BASE_URL}/recipes`);
+    await this.page.getByRole("link", { name, exact: true }).click();
+    await this.page.waitForURL(/\/recipes\/[0-9a-f-]{36}$/);
+    await this.page.getByTestId("composition-panel").waitFor();
+  }
+
+  costPerKg() {
+    return this.page.getByTestId("cost-per-kg").textContent();
+  }
+
+  costPerBar() {
+    return this.page.getByTestId("cost-per-bar").textContent();
+  }
+
+  /** Chooses the price source of a nibs or cocoa liquor line: the option whose name starts with `option`. */
+  async choosePriceSource(ingredient: string, option: string) {
+    await this.page.getByRole("combobox", { name: `Price source of ${ingredient}` }).click();
+    const escaped = option.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+    await this.page.getByRole("option", { name: new RegExp(`^${escaped}`) }).click();
+  }
 }
