@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { contentSecurityPolicy } from "@/lib/security/csp";
+import { PATH_HEADER } from "@/lib/unavailable-path";
 
 /**
  * Gives every page request a fresh CSP nonce: Next.js reads it from the
@@ -15,6 +16,8 @@ export function proxy(request: NextRequest) {
   const headers = new Headers(request.headers);
   headers.set("x-nonce", nonce);
   headers.set("Content-Security-Policy", csp);
+  // Where to come back to if the page finds the database down (lib/unavailable.ts).
+  headers.set(PATH_HEADER, request.nextUrl.pathname + request.nextUrl.search);
   const response = NextResponse.next({ request: { headers } });
   response.headers.set("Content-Security-Policy", csp);
   return response;

@@ -3,6 +3,7 @@ import { redirect } from "next/navigation";
 import { cache } from "react";
 import type { Role } from "@/db/schema";
 import { getMembership, listMembershipsForUser } from "@/lib/data/memberships";
+import { orUnavailablePage } from "@/lib/unavailable";
 import { getCurrentSession } from "./session";
 
 export type Viewer = {
@@ -30,9 +31,17 @@ export const getViewer = cache(async (): Promise<Viewer | null> => {
   };
 });
 
+/**
+ * For pages: the viewer or null, and when the database cannot be reached a
+ * redirect to the 503 page (lib/unavailable.ts) instead of an error page.
+ */
+export async function getPageViewer(): Promise<Viewer | null> {
+  return orUnavailablePage(() => getViewer());
+}
+
 /** For pages of the signed-in app: the viewer, or a redirect to sign-in. */
 export async function requireViewer(): Promise<Viewer> {
-  const viewer = await getViewer();
+  const viewer = await getPageViewer();
   if (!viewer) redirect("/sign-in");
   return viewer;
 }

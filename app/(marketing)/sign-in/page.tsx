@@ -1,12 +1,12 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
-import { getViewer } from "@/lib/auth/current";
+import { getPageViewer } from "@/lib/auth/current";
 import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };
 
 export default async function SignInPage() {
-  if (await getViewer()) redirect("/overview");
+  if (await getPageViewer()) redirect("/overview");
   return (
     <div className="mx-auto max-w-md px-gutter py-section">
       <h1 className="text-3xl font-bold">Sign in</h1>

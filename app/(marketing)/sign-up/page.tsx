@@ -1,12 +1,12 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
-import { getViewer } from "@/lib/auth/current";
+import { getPageViewer } from "@/lib/auth/current";
 import { SignUpForm } from "./sign-up-form";
 
 export const metadata: Metadata = { title: "Create a workspace" };
 
 export default async function SignUpPage() {
-  if (await getViewer()) redirect("/overview");
+  if (await getPageViewer()) redirect("/overview");
   return (
     <div className="mx-auto max-w-md px-gutter py-section">
       <h1 className="text-3xl font-bold">Create a workspace</h1>
