@@ -15,12 +15,11 @@
  */
 import { cpus, loadavg, totalmem } from "node:os";
 import { seedLargeWorkspace, LARGE, type LargeWorkspace } from "./bench/big-workspace";
-import { recipeName } from "./bench/generate";
+import { GENERATED_TYPES, recipeName } from "./bench/generate";
 import { drive, failures, table, type Phase } from "./bench/load-run";
 import { buildApp, freshDatabase, startServer, stackFor, withCleanup } from "./bench/stack";
 import { checkVersions } from "./bench/verify";
 import { linesFor, writerSetup, WRITERS, type WriterLedger } from "./bench/writers";
-import { GENERATED_TYPES } from "./bench/generate";
 
 const stack = stackFor("load");
 const seconds = Number(process.env.BARWRIGHT_BENCH_SECONDS ?? 10);
