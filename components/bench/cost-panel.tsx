@@ -38,7 +38,9 @@ export function CostPanel({
   const [choices, setChoices] = useState<LotChoices>({});
   const priced = withLotPrices(lines, ingredients, choices, lotSources);
   const cost = costRecipe(priced, { barMassGrams });
-  const fromLots = ingredients.some((i) => lotSources.some((s) => s.lotId === choices[i.id]));
+  const chosenLots = ingredients.flatMap((i) => lotSources.filter((s) => s.lotId === choices[i.id]));
+  const fromLots = chosenLots.length > 0;
+  const estimate = chosenLots.some((s) => s.estimated) ? " (estimate)" : "";
   const pickable = lotSources.length ? ingredients.filter((i) => LOT_PRICED_KINDS.includes(i.kind)) : [];
   const choose = (ingredientId: string, lotId: string) =>
     setChoices(({ [ingredientId]: _old, ...rest }) => (lotId === PREFERRED ? rest : { ...rest, [ingredientId]: lotId }));
@@ -51,13 +53,15 @@ export function CostPanel({
       />
       <dl className="divide-y divide-sand-light text-sm">
         <div className="flex justify-between py-1.5">
-          <dt>Per kg</dt>
+          <dt>Per kg{estimate}</dt>
           <dd className="figures text-right font-semibold" data-testid="cost-per-kg">
             {cost.ok ? money(cost.ingredientCostPerKg, currency) : "—"}
           </dd>
         </div>
         <div className="flex justify-between py-1.5">
-          <dt>Per bar of {barMassGrams} g</dt>
+          <dt>
+            Per bar of {barMassGrams} g{estimate}
+          </dt>
           <dd className="figures text-right text-lg font-bold" data-testid="cost-per-bar">
             {cost.ok ? money(cost.costPerBar, currency, 3) : "—"}
           </dd>
