@@ -13,6 +13,7 @@
 import { cpus, loadavg, totalmem } from "node:os";
 import { Client } from "pg";
 import { execFileSync } from "node:child_process";
+import { gzipSync } from "node:zlib";
 import { buildApp, freshDatabase, startServer, stackFor, withCleanup } from "./bench/stack";
 
 const stack = stackFor("pages");
@@ -47,7 +48,6 @@ type PageFigures = {
   cls: number;
   tbtMs: number;
   fcpMs: number;
-  lcpElement: string | null;
   /** Scripts the page loaded: count, bytes on the wire and uncompressed. */
   scripts: { count: number; transferBytes: number; resourceBytes: number; urls: string[] };
 };
@@ -56,6 +56,23 @@ type PageFigures = {
 function measurePage(url: string, cookie?: string): PageFigures {
   const out = execFileSync("node", ["scripts/bench/lighthouse-page.mjs", url, ...(cookie ? [cookie] : [])], { encoding: "utf8", stdio: ["ignore", "pipe", "inherit"] });
   return JSON.parse(out.trim().split("\n").at(-1)!) as PageFigures;
+}
+
+/**
+ * First-load JavaScript: the scripts the page's HTML names (what must arrive before it is
+ * interactive), uncompressed and gzipped; chunks imported later (a chart) are not counted.
+ */
+async function firstLoadJs(path: string, cookie?: string): Promise<{ count: number; bytes: number; gzipBytes: number }> {
+  const html = await (await fetch(`${stack.base}${path}`, { headers: cookie ? { cookie } : {} })).text();
+  const sources = [...new Set([...html.matchAll(/<script[^>]*\ssrc="([^"]+)"/g)].map((m) => m[1]!.replace(/&amp;/g, "&")))];
+  let bytes = 0;
+  let gzipBytes = 0;
+  for (const src of sources) {
+    const body = Buffer.from(await (await fetch(new URL(src, stack.base))).arrayBuffer());
+    bytes += body.length;
+    gzipBytes += gzipSync(body).length;
+  }
+  return { count: sources.length, bytes, gzipBytes };
 }
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
@@ -71,7 +88,7 @@ async function main(track: Parameters<Parameters<typeof withCleanup>[1]>[0]): Pr
     { label: "recipe list", path: "/recipes", cookie },
     { label: "bench (House dark)", path: `/recipes/${recipeId}`, cookie },
   ];
-  const results: { label: string; path: string; runs: PageFigures[] }[] = [];
+  const results: { label: string; path: string; runs: PageFigures[]; firstLoad: Awaited<ReturnType<typeof firstLoadJs>> }[] = [];
   // One unmeasured visit each: the server loads each route's code on first use.
   for (const p of pages) await fetch(`${stack.base}${p.path}`, { headers: p.cookie ? { cookie: p.cookie } : {} }).then((r) => r.text());
   const load = loadavg()[0]!;
@@ -79,19 +96,28 @@ async function main(track: Parameters<Parameters<typeof withCleanup>[1]>[0]): Pr
     const figures: PageFigures[] = [];
     for (let i = 0; i < runs; i++) figures.push(measurePage(`${stack.base}${p.path}`, p.cookie));
     console.log(`bench: ${p.label}: scores ${figures.map((f) => f.score).join(", ")}`);
-    results.push({ label: p.label, path: p.path, runs: figures });
+    results.push({ label: p.label, path: p.path, runs: figures, firstLoad: await firstLoadJs(p.path, p.cookie) });
   }
 
   console.log(`\nbench:pages — Lighthouse 12.2.3, desktop preset, median of ${runs}; ${new Date().toISOString().slice(0, 10)}, ${cpus().length} cores, ${(totalmem() / 2 ** 30).toFixed(0)} GiB, load average ${load.toFixed(2)} before measuring`);
-  const head = ["page", "score", "LCP", "CLS", "TBT", "FCP", "JS (scripts, wire / uncompressed)"];
-  const rows = results.map(({ label, runs: r }) => {
+  const head = ["page", "score", "LCP", "CLS", "TBT", "FCP", "first-load JS (gzip / raw)", "all JS while loading"];
+  const rows = results.map(({ label, runs: r, firstLoad }) => {
     const js = r[0]!.scripts;
-    return [label, String(median(r.map((f) => f.score))), `${(median(r.map((f) => f.lcpMs)) / 1000).toFixed(2)} s`, median(r.map((f) => f.cls)).toFixed(3), `${median(r.map((f) => f.tbtMs)).toFixed(0)} ms`, `${(median(r.map((f) => f.fcpMs)) / 1000).toFixed(2)} s`, `${js.count}, ${kb(js.transferBytes)} / ${kb(js.resourceBytes)}`];
+    return [
+      label,
+      String(median(r.map((f) => f.score))),
+      `${(median(r.map((f) => f.lcpMs)) / 1000).toFixed(2)} s`,
+      median(r.map((f) => f.cls)).toFixed(3),
+      `${median(r.map((f) => f.tbtMs)).toFixed(0)} ms`,
+      `${(median(r.map((f) => f.fcpMs)) / 1000).toFixed(2)} s`,
+      `${firstLoad.count} files, ${kb(firstLoad.gzipBytes)} / ${kb(firstLoad.bytes)}`,
+      `${js.count} files, ${kb(js.resourceBytes)}`,
+    ];
   });
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i]!.length)));
   for (const row of [head, ...rows]) console.log(row.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join("  "));
   if (process.env.BARWRIGHT_BENCH_VERBOSE === "1") {
-    for (const { label, runs: r } of results) console.log(`${label}: LCP element ${r[0]!.lcpElement}\n  ${r[0]!.scripts.urls.join("\n  ")}`);
+    for (const { label, runs: r } of results) console.log(`${label}: scripts while loading\n  ${r[0]!.scripts.urls.join("\n  ")}`);
   }
 
   let ok = true;

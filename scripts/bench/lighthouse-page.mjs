@@ -7,18 +7,6 @@ import * as chromeLauncher from "chrome-launcher";
 import lighthouse, { desktopConfig } from "lighthouse";
 
 const [url, cookie] = process.argv.slice(2);
-
-/** The LCP element's HTML snippet, wherever this Lighthouse version nests it. */
-function lcpElement(details) {
-  const stack = [details];
-  while (stack.length) {
-    const x = stack.pop();
-    if (!x || typeof x !== "object") continue;
-    if (x.type === "node" && x.snippet) return x.snippet;
-    stack.push(...Object.values(x));
-  }
-  return null;
-}
 const chrome = await chromeLauncher.launch({
   chromePath: process.env.BARWRIGHT_CHROMIUM ?? "/usr/bin/chromium",
   chromeFlags: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
@@ -39,7 +27,6 @@ try {
     cls: value("cumulative-layout-shift"),
     tbtMs: value("total-blocking-time"),
     fcpMs: value("first-contentful-paint"),
-    lcpElement: lcpElement(lhr.audits["largest-contentful-paint-element"]?.details),
     scripts: { count: scripts.length, transferBytes: sum("transferSize"), resourceBytes: sum("resourceSize"), urls: scripts.map((i) => `${new URL(i.url).pathname} ${i.resourceSize}`) },
   };
   process.stdout.write(`${JSON.stringify(figures)}\n`);
