@@ -8,6 +8,8 @@ import { slotDir, slotPort } from "./slot";
 export const clusters = {
   integration: { port: slotPort(54339), dir: slotDir(".data/pg-integration"), db: "barwright_test" },
   e2e: { port: slotPort(54349), dir: slotDir(".data/pg-e2e"), db: "barwright_e2e" },
+  // The fault tests stop and start their own cluster under their own app server (tests/e2e/zz-faults.test.ts).
+  faults: { port: slotPort(54359), dir: slotDir(".data/pg-faults"), db: "barwright_faults" },
 } as const;
 
 export type ClusterName = keyof typeof clusters;
