@@ -20,19 +20,20 @@ const PRICED_INGREDIENTS = `
     coalesce((select json_agg(json_build_object('currency', r.currency::text, 'rateToBase', r.rate_to_base::text, 'validOn', r.valid_on::text))
               from exchange_rates r where r.workspace_id = i.workspace_id), '[]'::json) as rates
   from ingredients i join workspaces w on w.id = i.workspace_id
-  where i.workspace_id = $1 and i.id = any($2::uuid[])`;
+  where i.workspace_id = $1 and ($2::uuid[] is null or i.id = any($2::uuid[]))`;
 
 /**
  * The named ingredients of the workspace with today's price, in ONE round trip:
  * composition, allergens, the preferred supplier's quotes and the workspace's
  * base currency and rates, then the price rule of getCurrentPrices (the current
  * quote on `on`, converted with the latest rate on or before it; lib/pricing).
- * What the evaluate API and a save read on every request; ids that are not this
- * workspace's are simply absent.
+ * What a save reads on every request (and the evaluate API through
+ * library-cache.ts); ids that are not this workspace's are simply absent.
+ * "all" reads the whole library.
  */
-export async function loadPricedIngredients({ workspaceId, ingredientIds, on }: { workspaceId: string; ingredientIds: readonly string[]; on: string }): Promise<Map<string, BenchIngredient>> {
-  const ids = [...new Set(ingredientIds)];
-  if (ids.length === 0) return new Map();
+export async function loadPricedIngredients({ workspaceId, ingredientIds, on }: { workspaceId: string; ingredientIds: readonly string[] | "all"; on: string }): Promise<Map<string, BenchIngredient>> {
+  const ids = ingredientIds === "all" ? null : [...new Set(ingredientIds)];
+  if (ids?.length === 0) return new Map();
   // A named statement: each connection plans it once and reuses the plan.
   const { rows } = await pool.query<Row>({ name: "priced-ingredients", text: PRICED_INGREDIENTS, values: [workspaceId, ids] });
   const out = new Map<string, BenchIngredient>();

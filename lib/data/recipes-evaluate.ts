@@ -2,11 +2,13 @@ import "server-only";
 import { costRecipe, evaluateRecipe, type CostResult, type Evaluation, type IngredientSpec, type RecipeLine } from "@/lib/formulation";
 import { toIngredientSpec } from "@/lib/recipes/engine-lines";
 import type { EvaluateRequest } from "@/lib/validation/recipes";
-import { loadBenchIngredients } from "./recipes-ingredients";
+import { invalid } from "@/lib/errors";
+import { cachedLibrary } from "./library-cache";
 
 /**
  * The engine's output for a recipe sent to the API. Library ingredients are read
- * with today's profile and price (without the price when `prices` is false: for
+ * with today's profile and price (through library-cache.ts: at most a few
+ * seconds old) (without the price when `prices` is false: for
  * those who may not see costs, who then get no cost either); inline ones are
  * taken as sent (already validated). Percents need not sum to 100: the engine
  * reads them as parts and warns.
@@ -23,7 +25,8 @@ export async function evaluateRequest({
   prices?: boolean;
 }): Promise<{ evaluation: Evaluation; cost?: CostResult }> {
   const ids = request.lines.flatMap((l) => ("ingredientId" in l ? [l.ingredientId] : []));
-  const library = await loadBenchIngredients({ workspaceId, ingredientIds: ids, on });
+  const library = ids.length ? await cachedLibrary({ workspaceId, on }) : new Map();
+  if (ids.some((id) => !library.has(id))) throw invalid("One of the ingredients is not in this workspace's library any more.", { lines: ["Unknown ingredient."] });
   const lines: RecipeLine[] = request.lines.map((l) => {
     const ingredient: IngredientSpec =
       "ingredientId" in l ? toIngredientSpec({ ...library.get(l.ingredientId)!, ...(prices ? {} : { pricePerKg: null }) }) : l.ingredient;
