@@ -15,7 +15,8 @@ export function GET(request: Request): Response {
 <meta http-equiv="refresh" content="30;url=${href}">
 <title>Database unavailable · Barwright</title>
 <style>
-body{margin:0;background:#FBF7F1;color:#2B1A12;font:17px/1.5 system-ui,sans-serif}
+@font-face{font-family:"Source Sans 3";src:url("/fonts/source-sans-3-latin-wght-normal.woff2") format("woff2");font-weight:200 900;font-display:swap}
+body{margin:0;background:#FBF7F1;color:#2B1A12;font:17px/1.5 "Source Sans 3",system-ui,sans-serif}
 main{max-width:34rem;margin:12vh auto;padding:2rem;border:1px solid #E6DACB;border-radius:12px;background:#fff}
 h1{font-size:1.5rem;margin:0 0 .75rem}a{color:#9E5714;font-weight:600}p{margin:.5rem 0}small{color:#6E5647}
 </style></head>
