@@ -1,9 +1,12 @@
-import type { Decimal } from "decimal.js";
-import { gridConstraintRows, gridCost, percentsAt, type Grid } from "./least-cost-grid";
+import type { NumericLp } from "./least-cost-highs";
+import type { Grid } from "./least-cost-grid";
+import { gridCost } from "./least-cost-grid";
 import type { LeastCostModel } from "./least-cost-model";
 
-/** Beyond this many fractional lines the 2^k roundings are left to the integer search. */
-const MAX_FRACTIONAL = 12;
+/** Beyond this many grid points a box is left to the integer search. */
+const MAX_POINTS = 50_000;
+
+type Row = NumericLp["rows"][number];
 
 /** One way of rounding: whole steps per free line, its cost and its distance from the current mix. */
 interface Candidate {
@@ -12,53 +15,83 @@ interface Candidate {
   readonly distance: number;
 }
 
-function choose(n: number, r: number, visit: (picked: readonly number[]) => void, start = 0, picked: number[] = []): void {
-  if (picked.length === r) {
-    visit(picked);
-    return;
+/** Each free line's optimum in whole steps (fractions kept). */
+function optimumSteps(grid: Grid, optimum: readonly number[]): number[] {
+  const step = grid.step.toNumber();
+  return grid.free.map((line) => Math.max(0, ((optimum[line] ?? 0) - grid.fixed[line]!.toNumber()) / step));
+}
+
+const isWhole = (s: number) => Math.abs(s - Math.round(s)) < 1e-7;
+
+/**
+ * Every grid point y with lower ≤ y ≤ upper (per free line) and Σ y = grid.steps that meets all
+ * `rows` (whole-number rows from gridConstraintRows, so the test is exact where they are whole),
+ * walked depth first with the running row activities; none when the box holds more than
+ * MAX_POINTS points. Σ y prunes the walk: the last line takes what is left.
+ */
+function walkBox(model: LeastCostModel, grid: Grid, rows: readonly Row[], lower: readonly number[], upper: readonly number[]): Candidate[] {
+  const m = grid.free.length;
+  let points = 1;
+  for (let k = 0; k < m; k++) points *= upper[k]! - lower[k]! + 1;
+  if (m === 0 || points > MAX_POINTS) return [];
+  // Fewest and most steps the lines after k can take, for the Σ y pruning.
+  const restMin = new Array<number>(m + 1).fill(0);
+  const restMax = new Array<number>(m + 1).fill(0);
+  for (let k = m - 1; k >= 0; k--) {
+    restMin[k] = restMin[k + 1]! + lower[k]!;
+    restMax[k] = restMax[k + 1]! + upper[k]!;
   }
-  for (let i = start; i <= n - (r - picked.length); i++) {
-    picked.push(i);
-    choose(n, r, visit, i + 1, picked);
-    picked.pop();
-  }
+  const perStep = gridCost(model, grid).perStep.map((c) => c.toNumber());
+  const step = grid.step.toNumber();
+  const current = grid.free.map((line) => model.lines[line]!.current.toNumber() - grid.fixed[line]!.toNumber());
+  const activity = new Array<number>(rows.length).fill(0);
+  const y = new Array<number>(m).fill(0);
+  const passing: Candidate[] = [];
+  const visit = (k: number, left: number): void => {
+    const from = Math.max(lower[k]!, left - restMax[k + 1]!);
+    const to = Math.min(upper[k]!, left - restMin[k + 1]!);
+    for (let v = from; v <= to; v++) {
+      y[k] = v;
+      rows.forEach((row, r) => (activity[r] = activity[r]! + row.coefficients[k]! * v));
+      if (k + 1 < m) visit(k + 1, left - v);
+      else if (rows.every((row, r) => activity[r]! >= row.lower - 1e-9 && activity[r]! <= row.upper + 1e-9)) {
+        const cost = y.reduce((sum, s, i) => sum + s * perStep[i]!, 0);
+        const distance = y.reduce((sum, s, i) => sum + Math.abs(s * step - current[i]!), 0);
+        passing.push({ y: y.slice(), cost, distance });
+      }
+      rows.forEach((row, r) => (activity[r] = activity[r]! - row.coefficients[k]! * v));
+    }
+  };
+  visit(0, grid.steps);
+  return passing;
 }
 
 /**
  * The quick rounding: every line the optimum leaves between two grid steps goes to its floor or
- * its ceiling, as many ceilings as keep the sum at 100 %, and the best of those roundings that
- * meets every constraint wins — the cheapest, or for "closest" the nearest to the current mix
- * among the cheapest (or under the user's ceiling). Rows come from gridConstraintRows, which
- * states them in whole numbers where it can, so the test on each candidate is exact; the caller
- * still re-checks the winner with decimals. Returns the passing roundings best first; none when
- * none passes or too many lines are fractional (the caller then runs the integer search).
+ * its ceiling (as many ceilings as keep the sum at 100 %), whole lines stay. Returns the grid
+ * points (steps per free line) that meet every row, best first — the cheapest, or for "closest"
+ * the nearest to the current mix among the cheapest (or under the user's ceiling). The caller
+ * re-checks the winner with decimals.
  */
-export function enumerateRoundings(model: LeastCostModel, grid: Grid, optimum: readonly number[]): Decimal[][] {
-  const step = grid.step.toNumber();
-  const steps = grid.free.map((line) => Math.max(0, ((optimum[line] ?? 0) - grid.fixed[line]!.toNumber()) / step));
-  const base = steps.map((s) => (Math.abs(s - Math.round(s)) < 1e-7 ? Math.round(s) : Math.floor(s)));
-  const fractional = steps.flatMap((s, k) => (Math.abs(s - Math.round(s)) < 1e-7 ? [] : [k]));
-  const ceilings = grid.steps - base.reduce((a, b) => a + b, 0);
-  if (fractional.length > MAX_FRACTIONAL || ceilings < 0 || ceilings > fractional.length) return [];
-  const rows = gridConstraintRows(model, grid);
-  const activity = rows.map((row) => row.coefficients.reduce((sum, c, k) => sum + c * base[k]!, 0));
-  const perStep = gridCost(model, grid).perStep.map((c) => c.toNumber());
-  const current = grid.free.map((line) => model.lines[line]!.current.toNumber() - grid.fixed[line]!.toNumber());
-  const passing: Candidate[] = [];
-  choose(fractional.length, ceilings, (picked) => {
-    const up = picked.map((p) => fractional[p]!);
-    const ok = rows.every((row, r) => {
-      const value = up.reduce((sum, k) => sum + row.coefficients[k]!, activity[r]!);
-      return value >= row.lower - 1e-9 && value <= row.upper + 1e-9;
-    });
-    if (!ok) return;
-    const y = base.slice();
-    for (const k of up) y[k] = y[k]! + 1;
-    const cost = y.reduce((sum, v, k) => sum + v * perStep[k]!, 0);
-    const distance = y.reduce((sum, v, k) => sum + Math.abs(v * step - current[k]!), 0);
-    passing.push({ y, cost, distance });
-  });
-  return rank(model, passing).map((c) => percentsAt(grid, c.y));
+export function enumerateRoundings(model: LeastCostModel, grid: Grid, optimum: readonly number[], rows: readonly Row[]): number[][] {
+  const steps = optimumSteps(grid, optimum);
+  const lower = steps.map((s) => (isWhole(s) ? Math.round(s) : Math.floor(s)));
+  const upper = steps.map((s) => (isWhole(s) ? Math.round(s) : Math.floor(s) + 1));
+  return rank(model, walkBox(model, grid, rows, lower, upper)).map((c) => c.y);
+}
+
+/**
+ * The wider rounding, for when no floor-or-ceiling rounding passes: every line the optimum uses
+ * may take any step from its floor − 1 to its ceiling + 1; lines it leaves empty stay empty.
+ * Cheap next to the integer search (a few thousand points for a 20-line milk recipe), which the
+ * caller still runs when this finds nothing.
+ */
+export function enumerateWindow(model: LeastCostModel, grid: Grid, optimum: readonly number[], rows: readonly Row[]): number[][] {
+  const steps = optimumSteps(grid, optimum);
+  const used = steps.map((s) => s > 1e-7);
+  const lower = steps.map((s, k) => (used[k] ? Math.max(0, Math.floor(s + 1e-9) - 1) : 0));
+  const upper = steps.map((s, k) => (used[k] ? Math.min(grid.steps, Math.ceil(s - 1e-9) + 1) : 0));
+  return rank(model, walkBox(model, grid, rows, lower, upper)).map((c) => c.y);
 }
 
 /** Best first: by cost then distance, or for "closest" by distance among those within the ceiling. */

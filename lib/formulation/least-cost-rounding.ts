@@ -3,8 +3,8 @@ import { Dec, HUNDRED, ZERO, toDecimalString } from "./decimal";
 import { distribute } from "./distribute";
 import { commonScale, formatUnits, powerOfTen, toUnits } from "./fixed";
 import { checkConstraint } from "./least-cost-check";
-import { enumerateRoundings } from "./least-cost-enumerate";
-import { buildGridLp, percentsAt, type Grid, type GridGoal, type GridWindow } from "./least-cost-grid";
+import { enumerateRoundings, enumerateWindow } from "./least-cost-enumerate";
+import { buildGridLp, gridConstraintRows, percentsAt, type Grid, type GridGoal, type GridWindow } from "./least-cost-grid";
 import { runLp, type LpSolver } from "./least-cost-highs";
 import type { LeastCostModel } from "./least-cost-model";
 import { ingredientCostPerKg } from "./cost-per-kg";
@@ -68,6 +68,18 @@ function searchGrid(solver: LpSolver, model: LeastCostModel, grid: Grid, goal: G
   return meetsAll(model, x) ? x : undefined;
 }
 
+/** Ranked grid points looked at, at most, before the integer search takes over. */
+const MAX_CHECKED = 50;
+
+/** The first of the ranked grid points that meets every constraint with exact decimals. */
+function firstPassing(model: LeastCostModel, grid: Grid, ranked: readonly number[][]): Decimal[] | undefined {
+  for (const y of ranked.slice(0, MAX_CHECKED)) {
+    const x = percentsAt(grid, y);
+    if (meetsAll(model, x)) return x;
+  }
+  return undefined;
+}
+
 /** Largest-remainder rounding of the optimum, locked lines kept (the slider rule's own code). */
 function nearest(model: LeastCostModel, optimum: readonly number[]): Decimal[] {
   const values = optimumAsDecimals(optimum).map((v, i) => (model.lines[i]!.locked ? model.lines[i]!.current : v));
@@ -88,7 +100,8 @@ function nearest(model: LeastCostModel, optimum: readonly number[]): Decimal[] {
 /**
  * Brings the solver's optimum onto the bench grid. First each line between two steps goes to its
  * floor or ceiling, and the best such rounding that meets every constraint wins
- * (enumerateRoundings). If none does, an integer search (HiGHS) finds the best grid mix that
+ * (enumerateRoundings); if none does, the same over one more step either side of each line the
+ * optimum uses (enumerateWindow, milliseconds). If none does, an integer search (HiGHS) finds the best grid mix that
  * meets every constraint within one step of the optimum, then over the whole grid (for
  * "closest", the nearest grid mix among the cheapest, or under the user's ceiling). Every answer
  * is re-checked with exact decimals. Only if no grid mix passes does it fall back to plain largest-remainder
@@ -98,9 +111,10 @@ export function roundToGrid(solver: LpSolver, model: LeastCostModel, optimum: re
   const notes: string[] = [];
   const grid = makeGrid(model, optimum, notes);
   if (grid !== undefined) {
-    const quick = enumerateRoundings(model, grid, optimum).find((x) => meetsAll(model, x));
+    const rows = gridConstraintRows(model, grid);
+    const quick = firstPassing(model, grid, enumerateRoundings(model, grid, optimum, rows)) ?? firstPassing(model, grid, enumerateWindow(model, grid, optimum, rows));
     if (quick !== undefined) return { percents: quick, method: "grid", notes };
-    // Then an integer search one step either side of the optimum (fast), then the whole grid.
+    // Then an integer search one step either side of the optimum, then the whole grid (slower).
     const window = windowAround(grid, optimum);
     let searched: GridWindow | undefined = window;
     let cheapest = searchGrid(solver, model, grid, { kind: "cost" }, window);
