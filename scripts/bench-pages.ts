@@ -58,17 +58,28 @@ function measurePage(url: string, cookie?: string): PageFigures {
   return JSON.parse(out.trim().split("\n").at(-1)!) as PageFigures;
 }
 
+/** fetch, once more on a network error (a kept-alive socket the server closed during a long Lighthouse run). */
+async function fetchAgain(url: string | URL, init: RequestInit = {}): Promise<Response> {
+  try {
+    return await fetch(url, init);
+  } catch {
+    return fetch(url, init);
+  }
+}
+
 /**
  * First-load JavaScript: the scripts the page's HTML names (what must arrive before it is
  * interactive), uncompressed and gzipped; chunks imported later (a chart) are not counted.
  */
 async function firstLoadJs(path: string, cookie?: string): Promise<{ count: number; bytes: number; gzipBytes: number }> {
-  const html = await (await fetch(`${stack.base}${path}`, { headers: cookie ? { cookie } : {} })).text();
-  const sources = [...new Set([...html.matchAll(/<script[^>]*\ssrc="([^"]+)"/g)].map((m) => m[1]!.replace(/&amp;/g, "&")))];
+  const html = await (await fetchAgain(`${stack.base}${path}`, { headers: cookie ? { cookie } : {} })).text();
+  // Module-capable browsers skip `nomodule` scripts (Next's legacy polyfills): not counted.
+  const tags = [...html.matchAll(/<script\b([^>]*)>/g)].map((m) => m[1]!).filter((attrs) => !/\bnomodule\b/i.test(attrs));
+  const sources = [...new Set(tags.flatMap((attrs) => [...attrs.matchAll(/\ssrc="([^"]+)"/g)].map((m) => m[1]!.replace(/&amp;/g, "&"))))];
   let bytes = 0;
   let gzipBytes = 0;
   for (const src of sources) {
-    const body = Buffer.from(await (await fetch(new URL(src, stack.base))).arrayBuffer());
+    const body = Buffer.from(await (await fetchAgain(new URL(src, stack.base))).arrayBuffer());
     bytes += body.length;
     gzipBytes += gzipSync(body).length;
   }
