@@ -7,6 +7,7 @@ import type { LeastCostSettings } from "./least-cost-problem";
 // The panel sits in the bench's narrow side column: tight cells, figures without the unit
 // (the headings carry "%"), and names that wrap, so four columns fit in about 300 px.
 const tight = "px-2";
+const heading = "whitespace-nowrap px-2";
 const cell = "figures w-14 rounded border border-sand bg-white px-1.5 py-1 text-right text-sm";
 
 /** Per-line minimum and maximum; locked lines stay where the bench has them. */
@@ -30,13 +31,13 @@ export function LeastCostBounds({
       <thead>
         <tr>
           <Th className={tight}>Line</Th>
-          <Th numeric className={tight}>
+          <Th numeric className={heading}>
             Now %
           </Th>
-          <Th numeric className={tight}>
+          <Th numeric className={heading}>
             Min %
           </Th>
-          <Th numeric className={tight}>
+          <Th numeric className={heading}>
             Max %
           </Th>
         </tr>
