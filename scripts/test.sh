@@ -4,6 +4,8 @@
 set -uo pipefail
 cd "$(dirname "$0")/.."
 export NEXT_TELEMETRY_DISABLED=1
+# The pinned AWS SDK (S3 client) works on Node 20; its notice that later releases will need Node 22 is noise here.
+export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
 mkdir -p .data
 
 step() { printf '\n== %s ==\n' "$1"; }
