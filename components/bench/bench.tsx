@@ -190,7 +190,7 @@ export function Bench({ recipe, base, library, currency, canEdit, showCosts, lot
           <TargetPanel ingredients={lineIngredients} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
         ) : null}
         {canEdit && state.lines.length >= 2 ? (
-          <LeastCostPanel lines={deferredLines} locked={deferredLocked} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />
+          <LeastCostPanel ingredients={lineIngredients} locked={locked} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />
         ) : null}
       </div>
       {theirs ? (

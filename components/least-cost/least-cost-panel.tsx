@@ -3,7 +3,7 @@
 import { memo, useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
-import { solveLeastCost, type LeastCostResult, type RecipeLine } from "@/lib/formulation";
+import { solveLeastCost, type IngredientSpec, type LeastCostResult, type RecipeLine } from "@/lib/formulation";
 import type { ChocolateType } from "@/lib/recipes/types";
 import { LeastCostBounds } from "./least-cost-bounds";
 import { categoriesFor, defaultCategories, toProblem, type LeastCostSettings } from "./least-cost-problem";
@@ -12,10 +12,12 @@ import { LeastCostSettingsForm } from "./least-cost-settings";
 import { useLpSolver } from "./use-lp-solver";
 
 export type LeastCostPanelProps = {
-  /** The bench's lines: ingredient (with today's price per kg) and percent. */
-  lines: RecipeLine[];
+  /** The lines' ingredients, in order, with today's price per kg (stable while only percents move). */
+  ingredients: readonly IngredientSpec[];
   /** The bench's locks, one per line. */
   locked: readonly boolean[];
+  /** The bench's lines and locks as they are now; read only when solving. */
+  read: () => { lines: RecipeLine[]; locked: readonly boolean[] };
   chocolateType: ChocolateType;
   /** The recipe's cocoa target, e.g. "70". */
   target: string | null;
@@ -30,29 +32,30 @@ export type LeastCostPanelProps = {
  * The least-cost mix: the cheapest recipe of the bench's ingredients that meets the chosen
  * standards, the cocoa target and each line's bounds, solved in the browser (HiGHS) by the
  * engine's solveLeastCost. Applying only changes the draft; the bench's save makes a version.
- * Memoised: the bench redraws on every slider step, and this panel only needs the lines once
- * that step is painted.
+ * Memoised, and it reads the lines' percents only when it solves: moving a slider on the bench
+ * leaves it alone (a shown proposal keeps the mix it was solved from in its "Now" column).
  */
-export const LeastCostPanel = memo(function LeastCostPanel({ lines, locked, chocolateType, target, currency, resolution, onApply }: LeastCostPanelProps) {
+export const LeastCostPanel = memo(function LeastCostPanel({ ingredients, locked, read, chocolateType, target, currency, resolution, onApply }: LeastCostPanelProps) {
   const solver = useLpSolver();
   const categories = useMemo(() => categoriesFor(chocolateType), [chocolateType]);
   const [settings, setSettings] = useState<LeastCostSettings>(() => ({
     categories: defaultCategories(chocolateType),
     targetMode: target ? "atLeast" : "none",
     target: target ?? "",
-    bounds: lines.map(() => ({ min: "", max: "" })),
+    bounds: ingredients.map(() => ({ min: "", max: "" })),
     objective: "cost",
   }));
   const [result, setResult] = useState<LeastCostResult | null>(null);
   const decimals = resolution.split(".")[1]?.length ?? 0;
   // Lines added or removed on the bench get empty bounds.
-  const bounds = lines.map((_, i) => settings.bounds[i] ?? { min: "", max: "" });
+  const bounds = ingredients.map((_, i) => settings.bounds[i] ?? { min: "", max: "" });
   const chosen = settings.categories.map((key) => categories.find((c) => `${c.authority}:${c.category}` === key)).filter((c) => c !== undefined);
 
   function solve(next: LeastCostSettings) {
     if (solver.status !== "ready") return;
     const started = performance.now();
-    const outcome = solveLeastCost(solver.solver, toProblem(lines, locked, { ...next, bounds: lines.map((_, i) => next.bounds[i] ?? { min: "", max: "" }) }, resolution));
+    const now = read();
+    const outcome = solveLeastCost(solver.solver, toProblem(now.lines, now.locked, { ...next, bounds: now.lines.map((_, i) => next.bounds[i] ?? { min: "", max: "" }) }, resolution));
     // A User Timing entry: the browser's profiler and `npm run bench:optimizer` read the solve time.
     performance.measure("least-cost:solve", { start: started, end: performance.now() });
     setResult(outcome);
@@ -69,9 +72,9 @@ export const LeastCostPanel = memo(function LeastCostPanel({ lines, locked, choc
       <CardHeader title="Least-cost mix" description="The cheapest mix of these ingredients at today's prices that still meets the standards and your target." />
       <div className="space-y-4">
         <LeastCostSettingsForm settings={{ ...settings, bounds }} categories={categories} onChange={update} />
-        <LeastCostBounds lines={lines} locked={locked} bounds={bounds} decimals={decimals} onChange={(b) => update({ ...settings, bounds: b })} />
+        <LeastCostBounds ingredients={ingredients} locked={locked} bounds={bounds} onChange={(b) => update({ ...settings, bounds: b })} />
         <div className="flex items-center gap-3">
-          <Button onClick={() => solve(settings)} disabled={solver.status !== "ready" || lines.length === 0}>
+          <Button onClick={() => solve(settings)} disabled={solver.status !== "ready" || ingredients.length === 0}>
             Find least-cost mix
           </Button>
           {solver.status === "loading" ? <span className="text-sm text-cocoa-500">Loading the solver…</span> : null}
