@@ -8,6 +8,7 @@ import { formatPercent, type CategoryRef, type LeastCostResult, type LeastCostSo
 import { money, signed } from "@/lib/recipes/format";
 
 const tight = "px-2";
+const heading = "whitespace-nowrap px-2";
 
 /** The proposal beside the current mix, narrow enough for the bench's side column. */
 function Comparison({ solution, currency, decimals }: { solution: LeastCostSolution; currency: string; decimals: number }) {
@@ -18,13 +19,13 @@ function Comparison({ solution, currency, decimals }: { solution: LeastCostSolut
         <thead>
           <tr>
             <Th className={tight}>Line</Th>
-            <Th numeric className={tight}>
+            <Th numeric className={heading}>
               Now %
             </Th>
-            <Th numeric className={tight}>
+            <Th numeric className={heading}>
               Proposed %
             </Th>
-            <Th numeric className={tight}>
+            <Th numeric className={heading}>
               Change
             </Th>
           </tr>
