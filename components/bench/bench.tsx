@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useLayoutEffect, useMemo, useReducer, useRef, useState } from "react";
 import { saveRecipeVersionAction } from "@/app/(app)/recipes/[recipeId]/actions";
@@ -21,10 +22,22 @@ import { SaveBar } from "./save-bar";
 import type { Fixer } from "./standard-category";
 import { StandardsPanel } from "./standards-panel";
 import { TargetPanel } from "./target-panel";
-import { LeastCostPanel } from "@/components/least-cost/least-cost-panel";
 import { useAfterPaint } from "./use-after-paint";
 import { useChosenAuthorities } from "./use-chosen-authorities";
 import { clearLocalDraft, readLocalDraft, useLocalDraft, type StoredDraft } from "./use-local-draft";
+
+/**
+ * The least-cost panel (and the solver's loader) stays off the bench's first load: it is
+ * below the fold and only needed when someone asks for the cheapest mix.
+ */
+const LeastCostPanel = dynamic(() => import("@/components/least-cost/least-cost-panel").then((m) => m.LeastCostPanel), {
+  ssr: false,
+  loading: () => (
+    <Card>
+      <CardHeader title="Least-cost mix" description="Loading…" />
+    </Card>
+  ),
+});
 
 export type BenchProps = {
   recipe: { id: string; name: string; chocolateType: ChocolateType; targetCocoaPercent: string | null };
