@@ -5,6 +5,7 @@ import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useLayoutEffect, useMemo, useReducer, useRef, useState } from "react";
 import { saveRecipeVersionAction } from "@/app/(app)/recipes/[recipeId]/actions";
 import { Card, CardHeader } from "@/components/ui/card";
+import { OnceVisible } from "@/components/ui/once-visible";
 import { useToast } from "@/components/ui/toast";
 import { costRecipe, evaluateRecipe, type RecipeLine } from "@/lib/formulation";
 import { toIngredientSpec } from "@/lib/recipes/engine-lines";
@@ -27,17 +28,21 @@ import { useChosenAuthorities } from "./use-chosen-authorities";
 import { clearLocalDraft, readLocalDraft, useLocalDraft, type StoredDraft } from "./use-local-draft";
 
 /**
- * The least-cost panel (and the solver's loader) stays off the bench's first load: it is
- * below the fold and only needed when someone asks for the cheapest mix.
+ * The least-cost panel (and the solver's loader) stays off the bench's load: it is below
+ * the fold, so it loads when it scrolls near the viewport (OnceVisible).
  */
 const LeastCostPanel = dynamic(() => import("@/components/least-cost/least-cost-panel").then((m) => m.LeastCostPanel), {
   ssr: false,
-  loading: () => (
+  loading: () => <LeastCostPlaceholder />,
+});
+
+function LeastCostPlaceholder() {
+  return (
     <Card>
       <CardHeader title="Least-cost mix" description="Loading…" />
     </Card>
-  ),
-});
+  );
+}
 
 export type BenchProps = {
   recipe: { id: string; name: string; chocolateType: ChocolateType; targetCocoaPercent: string | null };
@@ -203,7 +208,9 @@ export function Bench({ recipe, base, library, currency, canEdit, showCosts, lot
           <TargetPanel ingredients={lineIngredients} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
         ) : null}
         {canEdit && state.lines.length >= 2 ? (
-          <LeastCostPanel ingredients={lineIngredients} locked={locked} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />
+          <OnceVisible testId="least-cost-slot" placeholder={<LeastCostPlaceholder />}>
+            <LeastCostPanel ingredients={lineIngredients} locked={locked} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} currency={currency} resolution={RESOLUTION} onApply={applyPercents} />
+          </OnceVisible>
         ) : null}
       </div>
       {theirs ? (

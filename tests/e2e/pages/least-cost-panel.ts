@@ -10,6 +10,8 @@ export class LeastCostPanel {
 
   /** Waits until the solver has loaded in the page (the button is enabled only then). */
   async ready() {
+    // The panel loads when it scrolls near the viewport.
+    await this.page.getByTestId("least-cost-slot").scrollIntoViewIfNeeded();
     const find = this.root.getByRole("button", { name: "Find least-cost mix" });
     await find.waitFor();
     await this.page.waitForFunction((el) => !(el as HTMLButtonElement).disabled, await find.elementHandle(), { timeout: 30_000 });
