@@ -78,6 +78,9 @@ export default defineConfig({
         test: {
           name: "e2e",
           include: ["tests/e2e/**/*.test.ts"],
+          // After the unit and integration files, not beside them: the browser tests' timings
+          // (a save shown as saved within 30 s) should not depend on the fuzz tests' CPU use.
+          sequence: { sequencer: PathOrderSequencer, groupOrder: 1 },
           environment: "node",
           globalSetup: ["tests/e2e/global-setup.ts"],
           fileParallelism: false,

@@ -57,7 +57,15 @@ export class BenchPage {
 
   /** Waits until the bench shows `versionNo` as its saved base with nothing unsaved. */
   async waitForSaved(versionNo: number) {
-    await this.page.getByTestId("draft-status").filter({ hasText: `No changes since v${versionNo}.` }).waitFor();
+    try {
+      await this.page.getByTestId("draft-status").filter({ hasText: `No changes since v${versionNo}.` }).waitFor();
+    } catch (err) {
+      // Say what the bench showed instead, so a failure names its cause.
+      const status = await this.page.getByTestId("draft-status").textContent().catch(() => null);
+      const error = await this.page.getByTestId("save-error").textContent({ timeout: 500 }).catch(() => null);
+      const saveButton = await this.page.getByRole("button", { name: /^(Save as v\d+|Saving…)$/ }).textContent({ timeout: 500 }).catch(() => null);
+      throw new Error(`v${versionNo} not shown as saved; status: ${status}; error: ${error}; button: ${saveButton}`, { cause: err });
+    }
   }
 
   conflict() {
