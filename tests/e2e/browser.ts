@@ -1,4 +1,4 @@
-import { mkdtempSync } from "node:fs";
+import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { chromium, type BrowserContext } from "playwright-core";
@@ -18,11 +18,14 @@ export const CHROMIUM_ARGS = [
   "--disable-sync",
 ];
 
-/** A fresh browser profile per call, so no cookie leaks between tests. */
+/** A fresh browser profile per call, so no cookie leaks between tests; removed when the context closes. */
 export async function launchBrowser(): Promise<BrowserContext> {
-  return chromium.launchPersistentContext(mkdtempSync(path.join(tmpdir(), "barwright-e2e-")), {
+  const profile = mkdtempSync(path.join(tmpdir(), "barwright-e2e-"));
+  const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM_PATH,
     args: CHROMIUM_ARGS,
     viewport: { width: 1280, height: 900 },
   });
+  context.on("close", () => rmSync(profile, { recursive: true, force: true }));
+  return context;
 }
