@@ -26,6 +26,13 @@ export async function launchBrowser(): Promise<BrowserContext> {
     args: CHROMIUM_ARGS,
     viewport: { width: 1280, height: 900 },
   });
-  context.on("close", () => rmSync(profile, { recursive: true, force: true }));
+  context.on("close", () => {
+    // Chromium may still be writing its last files as the context closes: retry, and leave the folder rather than fail a test.
+    try {
+      rmSync(profile, { recursive: true, force: true, maxRetries: 10, retryDelay: 100 });
+    } catch {
+      /* a leftover folder in the system's temporary directory is harmless */
+    }
+  });
   return context;
 }

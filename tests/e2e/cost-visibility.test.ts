@@ -1,9 +1,8 @@
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser } from "./browser";
-import { E2E_BASE_URL } from "./config";
 import { MoneyPages } from "./pages/money-pages";
-import { SignInPage } from "./pages/sign-in-page";
+import { signInFresh } from "./pages/sign-in-page";
 
 let context: BrowserContext;
 let page: Page;
@@ -16,13 +15,7 @@ afterAll(async () => {
   await context?.close();
 });
 
-async function signInAs(email: string) {
-  await context.clearCookies();
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(email);
-  await page.waitForURL(`${E2E_BASE_URL}/overview`);
-}
+const signInAs = (email: string) => signInFresh(page, email);
 
 const costingLink = () => page.getByRole("navigation", { name: "Sections" }).getByRole("link", { name: "Costing" });
 

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser } from "./browser";
 import { E2E_BASE_URL } from "./config";
 import { CostingPage } from "./pages/costing-page";
-import { SignInPage } from "./pages/sign-in-page";
+import { signInFresh } from "./pages/sign-in-page";
 
 let context: BrowserContext;
 let page: Page;
@@ -16,13 +16,7 @@ afterAll(async () => {
   await context?.close();
 });
 
-async function signInAs(email: string) {
-  await context.clearCookies();
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(email);
-  await page.waitForURL(`${E2E_BASE_URL}/overview`);
-}
+const signInAs = (email: string) => signInFresh(page, email);
 
 // Demo data (invented prices, db/demo/ingredients.ts and db/demo/costing.ts). House dark 70 % v3, 70 g bar:
 // nibs 64 % at 16.20, cocoa butter 7.3 % at 19.80, sugar 28.3 %, lecithin 0.3 % at 6.80 GBP × 1.149,

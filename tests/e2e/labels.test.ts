@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser } from "./browser";
 import { E2E_BASE_URL } from "./config";
 import { LabelPage } from "./pages/label-page";
-import { SignInPage } from "./pages/sign-in-page";
+import { signInFresh } from "./pages/sign-in-page";
 
 let context: BrowserContext;
 let page: Page;
@@ -20,13 +20,7 @@ afterAll(async () => {
   await context?.close();
 });
 
-async function signInAs(email: string) {
-  await context.clearCookies();
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(email);
-  await page.waitForURL(`${E2E_BASE_URL}/overview`);
-}
+const signInAs = (email: string) => signInFresh(page, email);
 
 /** The text of a PDF, by poppler-utils' pdftotext (a test tool of the project). */
 function pdfText(bytes: Buffer): string {

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser } from "./browser";
 import { E2E_BASE_URL } from "./config";
 import { LotPage } from "./pages/lot-page";
-import { SignInPage } from "./pages/sign-in-page";
+import { signInFresh } from "./pages/sign-in-page";
 
 let context: BrowserContext;
 let page: Page;
@@ -17,13 +17,7 @@ afterAll(async () => {
   await context?.close();
 });
 
-async function signInAs(email: string) {
-  await context.clearCookies();
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(email);
-  await page.waitForURL(`${E2E_BASE_URL}/overview`);
-}
+const signInAs = (email: string) => signInFresh(page, email);
 
 describe("a lot from arrival to nibs", () => {
   it("is recorded by the buyer, processed by production, and costs its nibs from the real yield", async () => {

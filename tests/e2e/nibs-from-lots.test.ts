@@ -11,7 +11,7 @@ import { launchBrowser } from "./browser";
 import { E2E_BASE_URL } from "./config";
 import { BenchPage } from "./pages/bench-page";
 import { LotPage } from "./pages/lot-page";
-import { SignInPage } from "./pages/sign-in-page";
+import { signInFresh } from "./pages/sign-in-page";
 
 let context: BrowserContext;
 let page: Page;
@@ -24,13 +24,7 @@ afterAll(async () => {
   await context?.close();
 });
 
-async function signInAs(email: string) {
-  await context.clearCookies();
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(email);
-  await page.waitForURL(`${E2E_BASE_URL}/overview`);
-}
+const signInAs = (email: string) => signInFresh(page, email);
 
 const code = `TZ-E2E-${randomBytes(2).toString("hex")}`;
 // A price in the page's payload (RSC data escapes its quotes).

@@ -20,3 +20,12 @@ export class SignInPage {
     return this.page.getByTestId("form-error");
   }
 }
+
+/** Signs `email` in on `page` from a clean slate (no cookies of the previous person), landing on the overview. */
+export async function signInFresh(page: Page, email: string) {
+  await page.context().clearCookies();
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.signIn(email);
+  await page.waitForURL(`${E2E_BASE_URL}/overview`);
+}
