@@ -4,6 +4,7 @@ import { cache } from "react";
 import { lucia } from "./lucia";
 import { authSettings } from "./settings";
 import { generateToken, hashToken } from "./tokens";
+import { forgetSession, forgetViewersOf } from "./viewer-cache";
 
 /** The database session id for a cookie's token. */
 export const sessionIdFromToken = hashToken;
@@ -20,6 +21,12 @@ export async function startSession(userId: string, activeWorkspaceId: string | n
  * The signed-in user and session for this request, or nulls. Enforces the
  * absolute lifetime on top of Lucia's sliding idle timeout. Cached per request.
  */
+/** The database session id named by this request's cookie (not yet checked), or null. */
+export async function sessionIdFromCookie(): Promise<string | null> {
+  const token = (await cookies()).get(lucia.sessionCookieName)?.value;
+  return token ? sessionIdFromToken(token) : null;
+}
+
 export const getCurrentSession = cache(async () => {
   const jar = await cookies();
   const token = jar.get(lucia.sessionCookieName)?.value ?? null;
@@ -29,6 +36,7 @@ export const getCurrentSession = cache(async () => {
   if (result.session) {
     const ageMinutes = (Date.now() - result.session.createdAt.getTime()) / 60_000;
     if (ageMinutes > authSettings.absoluteLifetimeMinutes) {
+      forgetSession(sessionId);
       await lucia.invalidateSession(sessionId);
       trySetCookie(jar, lucia.createBlankSessionCookie());
       return { user: null, session: null } as const;
@@ -43,13 +51,19 @@ export const getCurrentSession = cache(async () => {
 
 /** Deletes every session of a user: sign out everywhere, password change, removal. */
 export async function endAllSessionsOf(userId: string): Promise<void> {
+  forgetViewersOf(userId);
   await lucia.invalidateUserSessions(userId);
+  forgetViewersOf(userId);
 }
 
 /** Ends this request's session and clears the cookie. */
 export async function endCurrentSession(): Promise<void> {
   const { session } = await getCurrentSession();
-  if (session) await lucia.invalidateSession(session.id);
+  if (session) {
+    forgetSession(session.id);
+    await lucia.invalidateSession(session.id);
+    forgetSession(session.id);
+  }
   const blank = lucia.createBlankSessionCookie();
   (await cookies()).set(blank.name, blank.value, blank.attributes);
 }

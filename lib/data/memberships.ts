@@ -2,6 +2,7 @@ import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, users, workspaces, type Role } from "@/db/schema";
+import { forgetViewersOf } from "@/lib/auth/viewer-cache";
 import { conflict, notFound } from "@/lib/errors";
 
 export type WorkspaceMembership = { workspaceId: string; workspaceName: string; role: Role };
@@ -73,6 +74,7 @@ export async function changeMemberRole({
     .update(memberships)
     .set({ role })
     .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+  forgetViewersOf(userId);
 }
 
 /** Removes a member from a workspace; the last owner cannot be removed. */
@@ -83,4 +85,5 @@ export async function removeMember({ workspaceId, userId }: { workspaceId: strin
     throw conflict("The last owner cannot be removed.");
   }
   await db.delete(memberships).where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+  forgetViewersOf(userId);
 }

@@ -2,6 +2,7 @@ import "server-only";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { sessions } from "@/db/schema";
+import { forgetSession } from "@/lib/auth/viewer-cache";
 
 /** Makes a workspace the active one of a session (membership checked by the caller). */
 export async function setActiveWorkspace({
@@ -17,6 +18,7 @@ export async function setActiveWorkspace({
     .update(sessions)
     .set({ activeWorkspaceId: workspaceId })
     .where(and(eq(sessions.id, sessionId), eq(sessions.userId, userId)));
+  forgetSession(sessionId);
 }
 
 export async function countSessionsOf({ userId }: { userId: string }): Promise<number> {
