@@ -2,7 +2,7 @@
 
 import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
-import { useCallback, useEffect, useLayoutEffect, useMemo, useReducer, useRef, useState } from "react";
+import { Suspense, useCallback, useEffect, useLayoutEffect, useMemo, useReducer, useRef, useState } from "react";
 import { saveRecipeVersionAction } from "@/app/(app)/recipes/[recipeId]/actions";
 import { Card, CardHeader } from "@/components/ui/card";
 import { OnceVisible } from "@/components/ui/once-visible";
@@ -182,19 +182,26 @@ export function Bench({ recipe, base, library, currency, canEdit, showCosts, lot
         {state.restoredAt ? <DraftBanner keptAt={state.restoredAt} baseVersionNo={draftBase} latestVersionNo={base.versionNo} onDiscard={discardRestored} /> : null}
         <Card>
           <CardHeader title="Lines" description="Drag, use the arrow keys (Shift for 1 %), or type an exact figure. Lock a line to keep it where it is." />
-          <LineList lines={state.lines} library={byId} readOnly={!canEdit} message={state.message} dispatch={dispatch} />
+          <Suspense>
+            <LineList lines={state.lines} library={byId} readOnly={!canEdit} message={state.message} dispatch={dispatch} />
+          </Suspense>
           {canEdit ? (
-            <>
+            <Suspense>
               <AddLine library={library} used={used} onAdd={addLine} />
               <SaveBar baseVersionNo={draftBase} dirty={dirty} saving={saving} note={note} error={error} onNote={(n) => dispatch({ type: "set-note", note: n })} onSave={() => save(draftBase)} />
-            </>
+            </Suspense>
           ) : null}
         </Card>
-        <StandardsPanel standards={deferredStandards} chosen={authorities} onChoose={chooseAuthorities} chocolateType={recipe.chocolateType} fixer={fixer} />
+        <Suspense>
+          <StandardsPanel standards={deferredStandards} chosen={authorities} onChoose={chooseAuthorities} chocolateType={recipe.chocolateType} fixer={fixer} />
+        </Suspense>
       </div>
       <div className="space-y-6">
-        <CompositionPanel composition={evaluation.composition} />
+        <Suspense>
+          <CompositionPanel composition={evaluation.composition} />
+        </Suspense>
         {showCosts ? (
+          <Suspense>
           <CostPanel
             lines={engineLines}
             ingredients={state.lines.map((l) => byId.get(l.ingredientId)!)}
@@ -203,9 +210,12 @@ export function Bench({ recipe, base, library, currency, canEdit, showCosts, lot
             currency={currency}
             onBarMass={canEdit ? setBarMass : undefined}
           />
+          </Suspense>
         ) : null}
         {canEdit && state.lines.length >= 2 ? (
-          <TargetPanel ingredients={lineIngredients} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
+          <Suspense>
+            <TargetPanel ingredients={lineIngredients} read={readCurrent} chocolateType={recipe.chocolateType} target={recipe.targetCocoaPercent === null ? null : tidy(recipe.targetCocoaPercent)} onApply={applyPercents} />
+          </Suspense>
         ) : null}
         {canEdit && state.lines.length >= 2 ? (
           <OnceVisible testId="least-cost-slot" placeholder={<LeastCostPlaceholder />}>

@@ -1,6 +1,3 @@
-"use client";
-
-import dynamic from "next/dynamic";
 import { memo } from "react";
 import type { CompositionFigures } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
@@ -18,23 +15,26 @@ const MIX_PARTS = [
   { key: "inclusions", label: "Inclusions", colour: "#7A5A3A" },
 ] as const satisfies ReadonlyArray<{ key: keyof CompositionFigures; label: string; colour: string }>;
 
-const ROW_HEIGHT = 22;
-
-// Recharts is the largest script of the bench: it loads after the first paint, into a box
-// already at its final height (no layout shift); the figures beside it never wait for it.
-const CompositionBars = dynamic(() => import("./composition-bars"), { ssr: false });
-
 /**
- * One bar per part of the finished product (parts at 0 are left out), drawn by
- * composition-bars.tsx. Every figure shown as text comes from the engine's strings.
+ * One bar per part of the finished product (parts at 0 are left out), on a
+ * 0–100 % track. Plain elements sized in percent: drawn with the page's HTML
+ * (nothing to load or measure, no layout shift) and cheap to redraw on every
+ * slider move. Every figure shown as text comes from the engine's strings.
  */
 export const CompositionChart = memo(function CompositionChart({ composition }: { composition: CompositionFigures }) {
   // Numbers only for drawing lengths.
   const rows = MIX_PARTS.map((p) => ({ ...p, value: Number(composition[p.key]) })).filter((r) => r.value > 0);
   const summary = rows.map((r) => `${r.label} ${pct(composition[r.key])}`).join(", ");
   return (
-    <div role="img" aria-label={`The mix: ${summary}`} style={{ height: rows.length * ROW_HEIGHT + 4 }} className="w-full">
-      <CompositionBars rows={rows} />
+    <div role="img" aria-label={`The mix: ${summary}`} className="grid w-full grid-cols-[8rem_minmax(0,1fr)] items-center gap-x-2 gap-y-1" data-testid="composition-chart">
+      {rows.map((r) => (
+        <div key={r.key} className="contents">
+          <span className="truncate text-right text-xs text-cocoa-500">{r.label}</span>
+          <span className="block h-[18px] rounded-[3px] bg-cream-deep">
+            <span className="block h-full rounded-[3px]" style={{ width: `${Math.min(100, r.value)}%`, backgroundColor: r.colour }} />
+          </span>
+        </div>
+      ))}
     </div>
   );
 });

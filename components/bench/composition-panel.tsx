@@ -6,7 +6,6 @@ import type { CompositionFigures } from "@/lib/formulation";
 import { pct } from "@/lib/recipes/format";
 import { CompositionChart } from "./composition-chart";
 import { markPaintAfterCommit } from "./paint-probe";
-import { useCalmValue } from "./use-calm-value";
 
 const FIGURES = [
   ["totalDryCocoaSolids", "Total dry cocoa solids"],
@@ -21,14 +20,12 @@ const FIGURES = [
 /** What is in the bar, percent of the finished product, with the label's cocoa figure. */
 export function CompositionPanel({ composition }: { composition: CompositionFigures }) {
   useLayoutEffect(() => markPaintAfterCommit(), [composition]);
-  // The figures follow every move at once. The chart (a Recharts redraw costs more script
-  // than a frame allows here) follows as soon as the thumb rests for 0.15 s.
-  const charted = useCalmValue(composition, 150);
+  // The figures and the chart (plain elements, cheap to redraw) follow every move at once.
   const hasInclusions = Number(composition.inclusions) > 0;
   return (
     <Card data-testid="composition-panel">
       <CardHeader title="Composition" description="Percent of the finished bar." />
-      <CompositionChart composition={charted} />
+      <CompositionChart composition={composition} />
       <dl className="mt-4 divide-y divide-sand-light text-sm">
         {FIGURES.map(([key, label]) => (
           <div key={key} className="flex justify-between py-1.5">

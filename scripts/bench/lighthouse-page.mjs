@@ -29,6 +29,11 @@ try {
     fcpMs: value("first-contentful-paint"),
     scripts: { count: scripts.length, transferBytes: sum("transferSize"), resourceBytes: sum("resourceSize"), urls: scripts.map((i) => `${new URL(i.url).pathname} ${i.resourceSize}`) },
   };
+  if (process.env.BARWRIGHT_BENCH_DETAIL === "1") {
+    // Where the blocking time goes: long tasks and each script's main-thread time.
+    const items = (id) => lhr.audits[id]?.details?.items ?? [];
+    process.stderr.write(`${JSON.stringify({ longTasks: items("long-tasks"), bootup: items("bootup-time"), mainThread: items("mainthread-work-breakdown") }, null, 1)}\n`);
+  }
   process.stdout.write(`${JSON.stringify(figures)}\n`);
 } finally {
   chrome.kill();
