@@ -15,6 +15,8 @@ declare module "autocannon" {
     connections?: number;
     duration?: number;
     amount?: number;
+    /** Requests a second across all connections (latency then counts from when each request was due). */
+    overallRate?: number;
     timeout?: number;
     pipelining?: number;
     title?: string;
