@@ -23,6 +23,7 @@ export function stackFor(name: "load" | "pages"): Stack {
     BARWRIGHT_PG_DB: db,
     BARWRIGHT_PG_FAST: "1",
     NEXT_TELEMETRY_DISABLED: "1",
+    AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true",
     BARWRIGHT_DIST_DIR: E2E_DIST_DIR,
   };
   delete env.DATABASE_URL;
