@@ -56,8 +56,9 @@ export const SliderRow = memo(function SliderRow({ index, name, percent, locked,
   }
 
   return (
-    <li className="grid grid-cols-[minmax(9rem,14rem)_1fr_7rem_auto] items-center gap-3 py-2" data-testid={`line-${index}`}>
-      <div className="min-w-0">
+    // On a phone the name takes its own row, so the slider keeps room to drag.
+    <li className="grid grid-cols-[minmax(0,1fr)_6rem_auto] items-center gap-x-3 gap-y-1 py-2 sm:grid-cols-[minmax(9rem,14rem)_1fr_7rem_auto] sm:gap-y-3" data-testid={`line-${index}`}>
+      <div className="col-span-3 min-w-0 sm:col-span-1">
         <p className="truncate font-semibold" title={name}>
           {name}
         </p>
