@@ -1,7 +1,7 @@
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { chromium, type BrowserContext } from "playwright-core";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
 
 /** Debian's chromium, driven by playwright-core; no browser is ever downloaded. */
 export const CHROMIUM_PATH = process.env.BARWRIGHT_CHROMIUM ?? "/usr/bin/chromium";
@@ -26,6 +26,8 @@ export async function launchBrowser(): Promise<BrowserContext> {
     args: CHROMIUM_ARGS,
     viewport: { width: 1280, height: 900 },
   });
+  for (const page of context.pages()) settleAfterGoto(page);
+  context.on("page", settleAfterGoto);
   context.on("close", () => {
     // Chromium may still be writing its last files as the context closes: retry, and leave the folder rather than fail a test.
     try {
@@ -35,4 +37,20 @@ export async function launchBrowser(): Promise<BrowserContext> {
     }
   });
   return context;
+}
+
+/**
+ * React streams a page's content into a hidden segment (`<div hidden id="S:0">`) and
+ * reveals it a moment later, batched on an animation frame; Playwright's "load" can come
+ * in between, and while React swaps the segment in, the same test ids may exist twice
+ * (a strict-mode error in a locator). So every `page.goto` of our contexts returns only
+ * once no hidden segment is left (bounded: 10 s, then the test's own waits decide).
+ */
+function settleAfterGoto(page: Page): void {
+  const goto = page.goto.bind(page);
+  page.goto = async (url, options) => {
+    const response = await goto(url, options);
+    await page.waitForFunction(() => !document.querySelector('div[hidden][id^="S:"]'), undefined, { timeout: 10_000 }).catch(() => undefined);
+    return response;
+  };
 }

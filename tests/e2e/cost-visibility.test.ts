@@ -1,19 +1,11 @@
-import type { BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser } from "./browser";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { onePagePerFile } from "./page-per-file";
 import { MoneyPages } from "./pages/money-pages";
 import { signInFresh } from "./pages/sign-in-page";
 
-let context: BrowserContext;
 let page: Page;
-
-beforeAll(async () => {
-  context = await launchBrowser();
-  page = context.pages()[0] ?? (await context.newPage());
-});
-afterAll(async () => {
-  await context?.close();
-});
+onePagePerFile((opened) => (page = opened));
 
 const signInAs = (email: string) => signInFresh(page, email);
 

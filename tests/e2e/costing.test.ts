@@ -1,20 +1,12 @@
-import type { BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser } from "./browser";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { onePagePerFile } from "./page-per-file";
 import { E2E_BASE_URL } from "./config";
 import { CostingPage } from "./pages/costing-page";
 import { signInFresh } from "./pages/sign-in-page";
 
-let context: BrowserContext;
 let page: Page;
-
-beforeAll(async () => {
-  context = await launchBrowser();
-  page = context.pages()[0] ?? (await context.newPage());
-});
-afterAll(async () => {
-  await context?.close();
-});
+onePagePerFile((opened) => (page = opened));
 
 const signInAs = (email: string) => signInFresh(page, email);
 

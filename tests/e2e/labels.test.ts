@@ -2,23 +2,15 @@ import { execFileSync } from "node:child_process";
 import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import type { BrowserContext, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser } from "./browser";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { onePagePerFile } from "./page-per-file";
 import { E2E_BASE_URL } from "./config";
 import { LabelPage } from "./pages/label-page";
 import { signInFresh } from "./pages/sign-in-page";
 
-let context: BrowserContext;
 let page: Page;
-
-beforeAll(async () => {
-  context = await launchBrowser();
-  page = context.pages()[0] ?? (await context.newPage());
-});
-afterAll(async () => {
-  await context?.close();
-});
+onePagePerFile((opened) => (page = opened));
 
 const signInAs = (email: string) => signInFresh(page, email);
 
