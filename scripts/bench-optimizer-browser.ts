@@ -19,6 +19,8 @@ async function press(page: Page): Promise<void> {
 /** Opens the case's recipe and sets the panel as the case says. */
 async function setUp(page: Page, base: string, recipeId: string, c: BenchCase): Promise<void> {
   await page.goto(`${base}/recipes/${recipeId}`);
+  // The panel loads when it scrolls near the viewport (components/ui/once-visible.tsx).
+  await page.getByTestId("least-cost-slot").scrollIntoViewIfNeeded();
   const panel = page.getByTestId("least-cost-panel");
   const find = panel.getByRole("button", { name: "Find least-cost mix" });
   await find.waitFor();

@@ -9,7 +9,7 @@
  * app into this slot's build folder (BARWRIGHT_BENCH_SKIP_BUILD=1 reuses it), serves it, measures,
  * and removes everything it started. Run: npm run bench:optimizer (BARWRIGHT_TEST_SLOT=N moves ports).
  */
-import { execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { execFileSync, type ChildProcess } from "node:child_process";
 import { mkdtempSync } from "node:fs";
 import { cpus, loadavg, tmpdir } from "node:os";
 import path from "node:path";
@@ -19,6 +19,7 @@ import { formatPercent, loadLpSolver, solveLeastCost } from "../lib/formulation"
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from "../tests/e2e/browser";
 import { E2E_DIST_DIR } from "../tests/e2e/config";
 import { slot, slotDir, slotPort } from "../tests/support/slot";
+import { startServer } from "./bench/stack";
 import { medianInPanel } from "./bench-optimizer-browser";
 import { CASES, problemOf } from "./bench-optimizer-problems";
 import { seedOptimizerCases } from "./bench-optimizer-seed";
@@ -52,16 +53,8 @@ async function inNode(): Promise<string[][]> {
   });
 }
 
-async function serve(): Promise<ChildProcess> {
-  const server = spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { env: { ...env, DATABASE_URL }, stdio: ["ignore", "ignore", "inherit"] });
-  for (let i = 0; i < 120; i++) {
-    if (server.exitCode !== null) throw new Error(`next start exited with code ${server.exitCode}`);
-    if (await fetch(`${BASE}/api/health`).then((r) => r.ok).catch(() => false)) return server;
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  server.kill("SIGTERM");
-  throw new Error("the app did not become healthy within 60 s");
-}
+/** `next start` of this slot's build (scripts/bench/stack.ts), once /api/health answers. */
+const serve = (): Promise<ChildProcess> => startServer({ env: { ...env, DATABASE_URL }, base: BASE, port: PORT });
 
 async function inChromium(recipeIds: Map<string, string>, fromNode: string[][]): Promise<void> {
   const context = await chromium.launchPersistentContext(mkdtempSync(path.join(tmpdir(), "bw-bench-")), { executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS, viewport: { width: 1280, height: 900 } });

@@ -10,7 +10,7 @@
  * slot's build folder (BARWRIGHT_BENCH_SKIP_BUILD=1 reuses it), serves it, measures, and
  * removes everything it started. Run: npm run bench:slider (BARWRIGHT_TEST_SLOT=N to move ports).
  */
-import { execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { execFileSync, type ChildProcess } from "node:child_process";
 import { mkdtempSync } from "node:fs";
 import { cpus, loadavg, tmpdir } from "node:os";
 import path from "node:path";
@@ -19,6 +19,7 @@ import { DEMO_PASSWORD } from "../db/seed";
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from "../tests/e2e/browser";
 import { E2E_DIST_DIR } from "../tests/e2e/config";
 import { slot, slotDir, slotPort } from "../tests/support/slot";
+import { startServer } from "./bench/stack";
 
 const PORT = 3105 + 10 * slot;
 const BASE = `http://127.0.0.1:${PORT}`;
@@ -28,16 +29,8 @@ const env: NodeJS.ProcessEnv = { ...process.env, ...cluster, NEXT_TELEMETRY_DISA
 delete env.DATABASE_URL;
 const run = (cmd: string, args: string[]) => execFileSync(cmd, args, { env, stdio: "inherit" });
 
-async function serve(): Promise<ChildProcess> {
-  const server = spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { env, stdio: ["ignore", "ignore", "inherit"] });
-  for (let i = 0; i < 120; i++) {
-    if (server.exitCode !== null) throw new Error(`next start exited with code ${server.exitCode}`);
-    if (await fetch(`${BASE}/api/health`).then((r) => r.ok).catch(() => false)) return server;
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  server.kill("SIGTERM");
-  throw new Error("the app did not become healthy within 60 s");
-}
+/** `next start` of this slot's build (scripts/bench/stack.ts), once /api/health answers. */
+const serve = (): Promise<ChildProcess> => startServer({ env, base: BASE, port: PORT });
 
 type Sample = { durations: number[]; commits: number[]; unpainted: number };
 

@@ -77,7 +77,7 @@ export function buildApp(stack: Stack): void {
 }
 
 /** `next start` on loopback by its own binary (one PID to end), once /api/health answers. */
-export async function startServer(stack: Stack): Promise<ChildProcess> {
+export async function startServer(stack: Pick<Stack, "env" | "base" | "port">): Promise<ChildProcess> {
   const server = spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(stack.port)], {
     env: stack.env,
     stdio: ["ignore", "ignore", "inherit"],
