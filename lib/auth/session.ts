@@ -17,16 +17,16 @@ export async function startSession(userId: string, activeWorkspaceId: string | n
   (await cookies()).set(cookie.name, cookie.value, cookie.attributes);
 }
 
-/**
- * The signed-in user and session for this request, or nulls. Enforces the
- * absolute lifetime on top of Lucia's sliding idle timeout. Cached per request.
- */
 /** The database session id named by this request's cookie (not yet checked), or null. */
 export async function sessionIdFromCookie(): Promise<string | null> {
   const token = (await cookies()).get(lucia.sessionCookieName)?.value;
   return token ? sessionIdFromToken(token) : null;
 }
 
+/**
+ * The signed-in user and session for this request, or nulls. Enforces the
+ * absolute lifetime on top of Lucia's sliding idle timeout. Cached per request.
+ */
 export const getCurrentSession = cache(async () => {
   const jar = await cookies();
   const token = jar.get(lucia.sessionCookieName)?.value ?? null;
@@ -36,7 +36,6 @@ export const getCurrentSession = cache(async () => {
   if (result.session) {
     const ageMinutes = (Date.now() - result.session.createdAt.getTime()) / 60_000;
     if (ageMinutes > authSettings.absoluteLifetimeMinutes) {
-      forgetSession(sessionId);
       await lucia.invalidateSession(sessionId);
       trySetCookie(jar, lucia.createBlankSessionCookie());
       return { user: null, session: null } as const;
@@ -50,6 +49,7 @@ export const getCurrentSession = cache(async () => {
 });
 
 /** Deletes every session of a user: sign out everywhere, password change, removal. */
+// The viewer cache is cleared before and after the delete: a request checked in between is not kept.
 export async function endAllSessionsOf(userId: string): Promise<void> {
   forgetViewersOf(userId);
   await lucia.invalidateUserSessions(userId);
