@@ -4,6 +4,8 @@
  * ingredients, 2,000 quotes, 500 lots), driven by autocannon for a bounded time:
  *   (a) GET /api/ping — the framework's ceiling (no database, no session)
  *   (b) POST /api/recipes/evaluate — the engine's evaluation of a 5-line recipe with costs
+ *       (standards in brief, the answer's default; once more, for information, with
+ *       `standards: "full"`, every check with its wording: four times the bytes)
  *   (c) GET /recipes?page=N — the recipe list page of the large workspace
  *   (d) POST /api/recipes/:id/versions — saves by 20 concurrent writers
  * then checks by SQL that no version was lost or duplicated. Targets: (b) ≥ 70 %
@@ -91,9 +93,11 @@ async function main(track: Parameters<Parameters<typeof withCleanup>[1]>[0]): Pr
   const cookies = await sessionCookies(ws, WRITERS);
   const cookie = cookies[0]!;
   const evaluateBody = JSON.stringify({ lines: linesFor(ws, "dark", 3), barMassGrams: "70" });
+  const evaluateFullBody = JSON.stringify({ lines: linesFor(ws, "dark", 3), barMassGrams: "70", standards: "full" });
   const json = { "content-type": "application/json", cookie, origin: stack.base };
   await expectOk("/api/ping", {});
-  await expectOk("/api/recipes/evaluate", { method: "POST", headers: json, body: evaluateBody }, '"standards"');
+  await expectOk("/api/recipes/evaluate", { method: "POST", headers: json, body: evaluateBody }, '"failed"');
+  await expectOk("/api/recipes/evaluate", { method: "POST", headers: json, body: evaluateFullBody }, '"clause"');
   await expectOk("/recipes", { headers: { cookie } }, recipeName(LARGE.recipes - 1, GENERATED_TYPES[(LARGE.recipes - 1) % GENERATED_TYPES.length]!));
 
   let page = 0;
@@ -108,6 +112,7 @@ async function main(track: Parameters<Parameters<typeof withCleanup>[1]>[0]): Pr
   const phases = {
     ping: { url: `${stack.base}/api/ping` },
     evaluate: { url: `${stack.base}/api/recipes/evaluate`, method: "POST", headers: json, body: evaluateBody },
+    evaluateFull: { url: `${stack.base}/api/recipes/evaluate`, method: "POST", headers: json, body: evaluateFullBody },
     list: { url: `${stack.base}/recipes`, headers: { cookie }, requests: [listRequest] },
     signIn: { url: `${stack.base}/sign-in` },
   };
@@ -124,6 +129,8 @@ async function main(track: Parameters<Parameters<typeof withCleanup>[1]>[0]): Pr
     evaluations.push(await drive(`(b) POST /api/recipes/evaluate${of}`, { ...phases.evaluate, duration: seconds }, pid));
   }
   const ceilingRate = rate(pings);
+  // For information, outside the ratio: the same evaluation with every check's wording.
+  const evaluateFull = await drive('(b′) POST /api/recipes/evaluate, standards "full"', { ...phases.evaluateFull, duration: seconds }, pid);
   // The cheapest page there is (no database, no session): what Next's rendering alone allows here.
   const signInPage = await drive("(c0) GET /sign-in (page ceiling), 10 connections", { ...phases.signIn, duration: seconds }, pid);
   const list = await drive("(c) GET /recipes (list page), 10 connections", { ...phases.list, duration: seconds }, pid);
@@ -142,7 +149,7 @@ async function main(track: Parameters<Parameters<typeof withCleanup>[1]>[0]): Pr
   );
   const contended = await contention(ws, cookies, ledger);
   const check = await checkVersions(stack.databaseUrl, ws.workspaceId, ledger.acknowledged);
-  const all: Phase[] = [...pings, ...evaluations, signInPage, list, listAtHalf, save];
+  const all: Phase[] = [...pings, ...evaluations, evaluateFull, signInPage, list, listAtHalf, save];
 
   console.log(`\nbench:load — ${new Date().toISOString().slice(0, 10)}, ${cpus().length} cores, ${(totalmem() / 2 ** 30).toFixed(0)} GiB, load average ${load.toFixed(2)} before measuring; large workspace seeded in ${seedSeconds.toFixed(0)} s`);
   console.log(table(all, ceilingRate));

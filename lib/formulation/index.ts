@@ -12,7 +12,7 @@ export type { EvaluateOptions } from "./evaluate-options";
 export type { CodexOptions } from "./codex-settings";
 export { DEFAULT_CODEX_SETTINGS } from "./codex-settings";
 export type { CompositionFigures, BaseFigures } from "./figures";
-export type { StandardCheck, StandardResult } from "./standards";
+export { summarizeStandards, type FailedCheck, type StandardCheck, type StandardResult, type StandardSummary } from "./standards";
 export * from "./rebalance";
 export * from "./normalize";
 export { DEFAULT_PERCENT_RESOLUTION } from "./resolution";

@@ -35,6 +35,43 @@ export interface StandardResult {
   checks: StandardCheck[];
 }
 
+/** A failed check without its wording: the figure, the limit and the gap. */
+export type FailedCheck = Pick<StandardCheck, "quantity" | "basis" | "actual" | "minimum" | "maximum" | "exclusiveMaximum" | "shortBy" | "overBy">;
+
+/**
+ * A category's outcome in brief: pass or fail, and only the checks that failed, without the
+ * wording (label, clause, source status, note) that is the same on every evaluation. Every
+ * figure a passed check read is in the evaluation's `bases`.
+ */
+export interface StandardSummary {
+  authority: Authority;
+  category: string;
+  reference: string;
+  pass: boolean;
+  failed: FailedCheck[];
+}
+
+/** The brief form of checkSources' results, in the same order. */
+export function summarizeStandards(results: readonly StandardResult[]): StandardSummary[] {
+  return results.map(({ authority, category, reference, pass, checks }) => ({
+    authority,
+    category,
+    reference,
+    pass,
+    failed: checks
+      .filter((c) => !c.pass)
+      .map(({ quantity, basis, actual, minimum, maximum, exclusiveMaximum, shortBy, overBy }) => {
+        const failed: FailedCheck = { quantity, basis, actual };
+        if (minimum !== undefined) failed.minimum = minimum;
+        if (maximum !== undefined) failed.maximum = maximum;
+        if (exclusiveMaximum) failed.exclusiveMaximum = exclusiveMaximum;
+        if (shortBy !== undefined) failed.shortBy = shortBy;
+        if (overBy !== undefined) failed.overBy = overBy;
+        return failed;
+      }),
+  }));
+}
+
 /**
  * What the checks read. `amount` and `mass` are exact and in the same units, so that the
  * percentage is amount / mass; `value` is that percentage as shown and `figure` its string.

@@ -176,6 +176,8 @@ export const evaluateRequestSchema = z
       .max(60, "At most 60 lines."),
     authorities: z.array(z.enum(["EU", "US", "Codex"], "Authorities are EU, US or Codex.")).max(3).optional(),
     barMassGrams: barMassSchema.optional(),
+    /** "summary" (the default): each category's pass and its failed checks; "full": every check with its wording. */
+    standards: z.enum(["summary", "full"], 'Standards are "summary" or "full".').optional(),
   })
   .strict();
 export type EvaluateRequest = z.infer<typeof evaluateRequestSchema>;

@@ -139,12 +139,34 @@ describe("the recipes JSON API", () => {
       params(),
     );
     expect(res.status).toBe(200);
-    const body = (await res.json()) as { evaluation: { composition: Record<string, string>; standards: { authority: string }[] }; cost: { ok: boolean } };
+    type Brief = { authority: string; category: string; pass: boolean; failed: { quantity: string; minimum?: string; shortBy?: string }[]; checks?: unknown };
+    const body = (await res.json()) as { evaluation: { composition: Record<string, string>; standards: Brief[] }; cost: { ok: boolean } };
     // REFERENCE.md §2 worked example: 60 % nibs (55 % butter, 2 % water) + 10 % butter + 30 % sugar = 68.8 % dry cocoa solids.
     expect(body.evaluation.composition.totalDryCocoaSolids).toBe("68.8");
     expect(body.evaluation.composition.cocoaSolidsStatement).toBe("68");
     expect(new Set(body.evaluation.standards.map((s) => s.authority))).toEqual(new Set(["EU"]));
     expect(body.cost.ok).toBe(false); // the library ingredients have no quote in this workspace
+
+    // The standards in brief by default: Directive 2000/36/EC Annex I A.4(a), milk chocolate needs ≥ 14 % dry milk solids; this bar has none.
+    const milk = body.evaluation.standards.find((s) => s.category === "milk chocolate")!;
+    expect(milk.pass).toBe(false);
+    expect(milk.failed).toContainEqual(expect.objectContaining({ quantity: "dryMilkSolids", minimum: "14", shortBy: "14" }));
+    expect(milk.checks).toBeUndefined();
+    // Directive 2000/36/EC Annex I A.3(a): chocolate ≥ 35 % dry cocoa solids, ≥ 18 % cocoa butter, ≥ 14 % fat-free: all met.
+    expect(body.evaluation.standards.find((s) => s.category === "chocolate")).toMatchObject({ pass: true, failed: [] });
+
+    // Every check with its wording on request.
+    const full = await postEvaluate(
+      jsonRequest("POST", "/api/recipes/evaluate", { lines: [{ ingredientId: ids.nibs, percent: "70" }, { ingredientId: ids.butter, percent: "30" }], authorities: ["EU"], standards: "full" }),
+      params(),
+    );
+    const fullBody = (await full.json()) as { evaluation: { standards: { category: string; checks: { label: string; clause: string }[] }[] } };
+    expect(fullBody.evaluation.standards.find((s) => s.category === "chocolate")!.checks).toContainEqual(
+      expect.objectContaining({ label: "total dry cocoa solids ≥ 35 %", clause: "Directive 2000/36/EC Annex I A.3(a)" }),
+    );
+    const wrongDetail = await postEvaluate(jsonRequest("POST", "/api/recipes/evaluate", { lines: [{ ingredientId: ids.nibs, percent: "100" }], standards: "all" }), params());
+    expect(wrongDetail.status).toBe(422);
+    expect(((await wrongDetail.json()) as { error: { fieldErrors: Record<string, string[]> } }).error.fieldErrors.standards).toEqual(['Standards are "summary" or "full".']);
 
     const bad = await postEvaluate(jsonRequest("POST", "/api/recipes/evaluate", { lines: [{ percent: "120" }], authorities: ["Mars"] }), params());
     expect(bad.status).toBe(422);

@@ -8,6 +8,8 @@ import { evaluateRequestSchema } from "@/lib/validation/recipes";
  * a library ingredient (today's profile and price) or carry their own profile.
  * With barMassGrams, also the ingredient cost per kg and per bar. Library
  * prices and costs only for those who may see costs (lib/auth/costs.ts).
+ * Standards come in brief — each category's pass and its failed checks — unless
+ * the body says `standards: "full"` (every check with its label and clause).
  */
 export const POST = apiRoute({
   permission: "recipes.read",
