@@ -37,8 +37,8 @@ const allColumns = [
     enableGlobalFilter: false,
     cell: (c) => (c.getValue() === null ? <span className="text-xs text-brick" title={c.row.original.conversionProblem ?? ""}>no rate</span> : perKg(c.getValue(), c.row.original.base)),
   }),
-  col.accessor("validFrom", { header: "Valid from", sortFn: "alphanumeric", cell: (c) => formatDate(c.getValue()) }),
-  col.accessor((r) => r.validUntil ?? "", { id: "validUntil", header: "Until", sortFn: "alphanumeric", cell: (c) => (c.getValue() ? formatDate(c.getValue()) : "open") }),
+  col.accessor("validFrom", { header: "Valid from", sortFn: "alphanumeric", meta: { nowrap: true }, cell: (c) => formatDate(c.getValue()) }),
+  col.accessor((r) => r.validUntil ?? "", { id: "validUntil", header: "Until", sortFn: "alphanumeric", meta: { nowrap: true }, cell: (c) => (c.getValue() ? formatDate(c.getValue()) : "open") }),
   col.accessor((r) => (r.current ? "current" : ""), {
     id: "status",
     header: "Status",

@@ -21,17 +21,14 @@ export async function AppHeader({ viewer }: { viewer: Viewer }) {
         <Wordmark href="/overview" />
         <NavLinks items={items} />
         <div className="ml-auto flex items-center gap-4">
+          {/* One workspace: its name is in the account menu, and the section bar keeps the room. */}
           {workspaces.length > 1 ? (
             <WorkspaceSwitcher
               current={viewer.workspace.id}
               workspaces={workspaces.map((w) => ({ value: w.workspaceId, label: w.workspaceName }))}
             />
-          ) : (
-            <span className="hidden text-sm text-cocoa-500 md:inline" data-testid="workspace-name">
-              {viewer.workspace.name}
-            </span>
-          )}
-          <UserMenu name={viewer.user.name} email={viewer.user.email} role={viewer.role} />
+          ) : null}
+          <UserMenu name={viewer.user.name} email={viewer.user.email} role={viewer.role} workspace={viewer.workspace.name} />
         </div>
       </div>
     </header>

@@ -16,7 +16,7 @@ export function NavLinks({ items }: { items: ReadonlyArray<{ href: string; label
             href={item.href}
             aria-current={active ? "page" : undefined}
             className={cn(
-              "shrink-0 whitespace-nowrap rounded-md px-3 py-1.5 text-sm font-semibold text-cocoa-700 hover:bg-cream-deep",
+              "shrink-0 whitespace-nowrap rounded-md px-2.5 py-1.5 text-sm font-semibold text-cocoa-700 hover:bg-cream-deep",
               active && "bg-pod-light text-pod-dark",
             )}
           >

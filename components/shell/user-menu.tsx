@@ -7,7 +7,7 @@ import { signOutAction } from "@/app/(app)/actions";
 import type { Role } from "@/db/schema";
 import { can } from "@/lib/auth/permissions";
 
-export function UserMenu({ name, email, role }: { name: string; email: string; role: Role }) {
+export function UserMenu({ name, email, role, workspace }: { name: string; email: string; role: Role; workspace: string }) {
   const [signingOut, startSignOut] = useTransition();
   const initials = name
     .split(/\s+/)
@@ -28,7 +28,10 @@ export function UserMenu({ name, email, role }: { name: string; email: string; r
           <div className="px-3 py-2">
             <p className="font-semibold">{name}</p>
             <p className="text-sm text-cocoa-500">{email}</p>
-            <p className="mt-1 text-xs uppercase tracking-wide text-pod-dark">{role}</p>
+            <p className="mt-2 text-sm" data-testid="account-menu-workspace">
+              {workspace}
+            </p>
+            <p className="text-xs uppercase tracking-wide text-pod-dark">{role}</p>
           </div>
           <Menu.Separator className="my-1 h-px bg-sand" />
           <Menu.Item asChild>

@@ -11,7 +11,7 @@ export function WorkspaceSwitcher({ current, workspaces }: { current: string; wo
   const toast = useToast();
   const [, start] = useTransition();
   return (
-    <div className="w-44 shrink-0" data-testid="workspace-switcher">
+    <div className="w-36 shrink-0" data-testid="workspace-switcher">
       <Select
         value={current}
         ariaLabel="Workspace"

@@ -5,6 +5,9 @@ import { useState, type ReactNode } from "react";
 import { cn } from "@/lib/cn";
 import { tableFeatureSet, type TableFeatureSet } from "./features";
 
+/** A column's `meta`: `numeric` right-aligns tabular figures; `nowrap` keeps a short value (a date) on one line. */
+export type ColumnLook = { numeric?: boolean; nowrap?: boolean };
+
 /**
  * A sortable, searchable, filterable table (TanStack Table v9) in our table
  * style. The caller owns the search box and column filters (so they can live
@@ -46,7 +49,7 @@ export function DataTable<Row extends RowData>({
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((header) => {
-                const numeric = (header.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
+                const numeric = (header.column.columnDef.meta as ColumnLook | undefined)?.numeric;
                 const sorted = header.column.getIsSorted();
                 return (
                   <th
@@ -89,9 +92,12 @@ export function DataTable<Row extends RowData>({
             rows.map((row) => (
               <tr key={row.id} data-testid={rowTestId?.(row.original)} className="hover:bg-cream/60">
                 {row.getAllCells().map((cell) => {
-                  const numeric = (cell.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
+                  const meta = cell.column.columnDef.meta as ColumnLook | undefined;
                   return (
-                    <td key={cell.id} className={cn("border-b border-sand-light px-4 py-2.5", numeric && "figures whitespace-nowrap text-right")}>
+                    <td
+                      key={cell.id}
+                      className={cn("border-b border-sand-light px-4 py-2.5", meta?.numeric && "figures whitespace-nowrap text-right", meta?.nowrap && "whitespace-nowrap")}
+                    >
                       <table.FlexRender cell={cell} />
                     </td>
                   );

@@ -23,11 +23,11 @@ export function Th({ className, numeric, ...props }: ThHTMLAttributes<HTMLTableC
   );
 }
 
-/** A table cell; `numeric` right-aligns with tabular figures. */
+/** A table cell; `numeric` right-aligns with tabular figures and keeps a figure with its unit on one line. */
 export function Td({ className, numeric, ...props }: TdHTMLAttributes<HTMLTableCellElement> & { numeric?: boolean }) {
   return (
     <td
-      className={cn("border-b border-sand-light px-4 py-2.5", numeric && "figures text-right", className)}
+      className={cn("border-b border-sand-light px-4 py-2.5", numeric && "figures whitespace-nowrap text-right", className)}
       {...props}
     />
   );

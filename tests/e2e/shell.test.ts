@@ -55,7 +55,15 @@ describe("the signed-in shell", () => {
     await signIn.open();
     await signIn.signIn(DEMO_PEOPLE[0]!.email);
     await page.waitForURL(`${E2E_BASE_URL}/overview`);
-    expect(await page.getByTestId("workspace-name").textContent()).toBe(DEMO_WORKSPACE.name);
+    // At a laptop's 1280 px every section fits the bar: none is cut off or hidden behind a scroll.
+    const nav = page.getByRole("navigation", { name: "Sections" });
+    expect(await nav.getByRole("link").count()).toBeGreaterThanOrEqual(9);
+    const [scrollWidth, clientWidth] = await nav.evaluate((el) => [el.scrollWidth, el.clientWidth]);
+    expect(scrollWidth).toBeLessThanOrEqual(clientWidth);
+    // The account menu names the workspace and the role in it.
+    await page.getByRole("button", { name: /Account menu/ }).click();
+    expect(await page.getByTestId("account-menu-workspace").textContent()).toBe(DEMO_WORKSPACE.name);
+    await page.keyboard.press("Escape");
     for (const person of DEMO_PEOPLE) {
       expect(await page.getByRole("cell", { name: person.name }).count()).toBe(1);
     }

@@ -21,7 +21,7 @@ export default async function LotsPage() {
   ]);
   return (
     <div className="space-y-6">
-      <div className="flex items-end justify-between gap-4">
+      <div className="flex flex-wrap items-end justify-between gap-4">
         <div>
           <h1 className="text-3xl font-bold">Bean lots</h1>
           <p className="mt-2 max-w-2xl text-cocoa-700">
@@ -60,7 +60,7 @@ export default async function LotsPage() {
           <tbody>
             {lots.map((l) => (
               <tr key={l.id} data-testid={`lot-${l.code}`}>
-                <Td>
+                <Td className="whitespace-nowrap">
                   <Link href={`/lots/${l.id}`} className="font-semibold text-pod-dark underline-offset-2 hover:underline">
                     {l.code}
                   </Link>
@@ -70,7 +70,7 @@ export default async function LotsPage() {
                   {l.producer ? <span className="block text-xs text-cocoa-500">{l.producer}</span> : null}
                 </Td>
                 <Td>{l.supplierName ?? "—"}</Td>
-                <Td>{formatDate(l.arrivedOn)}</Td>
+                <Td className="whitespace-nowrap">{formatDate(l.arrivedOn)}</Td>
                 <Td numeric>{formatKg(l.massReceivedKg, 1)}</Td>
                 <Td numeric>{formatKg(l.chain.nibMassKg, 1)}</Td>
                 <Td numeric>{nibStock.get(l.id)?.winnowed ? formatKg(nibStock.get(l.id)!.inStockKg, 1) : "—"}</Td>
