@@ -59,7 +59,7 @@ export function ComparisonTable({ recipeId, report, currency, canEdit }: Props) 
                 if (!cell) return <Td key={c.key} numeric className="text-cocoa-300">—</Td>;
                 const cheapest = row.cheapestKey === c.key;
                 return (
-                  <Td key={c.key} numeric className={cn(cheapest && "bg-sage-light")} data-cheapest={cheapest || undefined}>
+                  <Td key={c.key} numeric className={cn("whitespace-normal", cheapest && "bg-sage-light")} data-cheapest={cheapest || undefined}>
                     <span className="whitespace-nowrap font-semibold">{cell.option.perKg ? `${cents(cell.option.perKg, currency)}/kg` : "no price"}</span>
                     <span className="mt-1 flex flex-wrap justify-end gap-1">
                       {cheapest ? <Badge tone="meets">cheapest</Badge> : null}

@@ -8,10 +8,10 @@ import { pct } from "@/lib/recipes/format";
 import { cn } from "@/lib/cn";
 
 /**
- * The recipe's name and state, and its pages (bench, history) for those who may see every version;
+ * The recipe's name and state, and its pages (bench, history, label) for those who may see every version;
  * the Costs tab only for those who may see costs (both checks are cached per request).
  */
-export async function RecipeHeader({ recipe, current, readsAll, actions }: { recipe: RecipeRecord; current: "bench" | "history" | "version"; readsAll: boolean; actions?: ReactNode }) {
+export async function RecipeHeader({ recipe, current, readsAll, actions }: { recipe: RecipeRecord; current: "bench" | "history" | "label" | "version"; readsAll: boolean; actions?: ReactNode }) {
   const costsTab = await canSeeCosts(await requireViewer());
   const tab = (href: string, label: string, active: boolean) => (
     <Link
@@ -49,7 +49,7 @@ export async function RecipeHeader({ recipe, current, readsAll, actions }: { rec
           {tab(`/recipes/${recipe.id}`, "Bench", current === "bench")}
           {tab(`/recipes/${recipe.id}/history`, "History", current === "history")}
           {costsTab ? tab(`/costing/${recipe.id}`, "Costs", false) : null}
-          {tab(`/recipes/${recipe.id}/label`, "Label", false)}
+          {tab(`/recipes/${recipe.id}/label`, "Label", current === "label")}
         </nav>
       ) : null}
     </div>

@@ -33,6 +33,7 @@ describe("the label of a demo recipe", () => {
     const label = new LabelPage(page);
     await label.openFromRecipes("House dark 70 %");
     expect(await page.getByRole("navigation", { name: "Label of version" }).getByRole("link", { name: /v2/ }).getAttribute("aria-current")).toBe("page");
+    expect(await page.getByRole("navigation", { name: "Recipe" }).getByRole("link", { name: "Label" }).getAttribute("aria-current")).toBe("page");
 
     const eu: Record<string, string> = {};
     for (const row of ["energy", "fat", "saturates", "carbohydrate", "sugars", "fibre", "protein", "salt"]) eu[row] = await label.euPer100g(row);

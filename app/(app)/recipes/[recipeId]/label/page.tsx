@@ -29,7 +29,7 @@ export default async function LabelPage({ params, searchParams }: { params: Prom
   if (loaded instanceof AppError && asked.data !== undefined) notFound();
   return (
     <>
-      <RecipeHeader recipe={recipe} current="version" readsAll={readsAll} />
+      <RecipeHeader recipe={recipe} current="label" readsAll={readsAll} />
       <div className="space-y-6">
         <LabelCaution />
         {loaded instanceof AppError ? (
