@@ -42,7 +42,8 @@ export function DataTable<Row extends RowData>({
   });
   const rows = table.getRowModel().rows;
   return (
-    <div className="overflow-x-auto rounded-card border border-sand bg-white">
+    // Positioned, so that a visually hidden caption stays inside the scrolling box.
+    <div className="relative overflow-x-auto rounded-card border border-sand bg-white">
       <table className="w-full border-collapse text-sm">
         {caption ? <caption className="sr-only">{caption}</caption> : null}
         <thead>

@@ -2,8 +2,9 @@ import type { HTMLAttributes, TdHTMLAttributes, ThHTMLAttributes } from "react";
 import { cn } from "@/lib/cn";
 
 export function Table({ className, ...props }: HTMLAttributes<HTMLTableElement>) {
+  // Positioned, so that visually hidden header text (sr-only, absolute) stays inside the scrolling box instead of widening the page.
   return (
-    <div className="overflow-x-auto rounded-card border border-sand bg-white">
+    <div className="relative overflow-x-auto rounded-card border border-sand bg-white">
       <table className={cn("w-full border-collapse text-sm", className)} {...props} />
     </div>
   );

@@ -119,17 +119,20 @@ export async function draftPurchaseOrder({
 
 export type OrderListRow = { id: string; number: string; status: PurchaseOrderStatus; supplierName: string; createdAt: Date; sentAt: Date | null; receivedOn: string | null };
 
+/** The columns of an order in a list (join `suppliers` on the order's supplier). */
+export const orderListColumns = {
+  id: purchaseOrders.id,
+  number: purchaseOrders.number,
+  status: purchaseOrders.status,
+  supplierName: suppliers.name,
+  createdAt: purchaseOrders.createdAt,
+  sentAt: purchaseOrders.sentAt,
+  receivedOn: purchaseOrders.receivedOn,
+};
+
 export async function listPurchaseOrders({ workspaceId, limit = 200 }: { workspaceId: string; limit?: number }): Promise<OrderListRow[]> {
   return db
-    .select({
-      id: purchaseOrders.id,
-      number: purchaseOrders.number,
-      status: purchaseOrders.status,
-      supplierName: suppliers.name,
-      createdAt: purchaseOrders.createdAt,
-      sentAt: purchaseOrders.sentAt,
-      receivedOn: purchaseOrders.receivedOn,
-    })
+    .select(orderListColumns)
     .from(purchaseOrders)
     .innerJoin(suppliers, eq(suppliers.id, purchaseOrders.supplierId))
     .where(eq(purchaseOrders.workspaceId, workspaceId))

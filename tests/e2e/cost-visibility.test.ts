@@ -27,6 +27,7 @@ describe("money for production", () => {
       expect(recipes.headers.join("|")).not.toContain("Cost per bar");
       expect(recipes.headers.join("|")).toContain("Cocoa");
       expect(recipes.money).toEqual([]);
+      expect(await pages.overview()).toEqual({ margins: 0, money: [] });
 
       await signInAs("mara@fenwicklane.example");
       await pages.shareCosts(true);
@@ -42,6 +43,9 @@ describe("money for production", () => {
       const pricedRecipes = await pages.recipeList();
       expect(pricedRecipes.headers.join("|")).toContain("Cost per bar");
       expect(pricedRecipes.money.length).toBeGreaterThan(0);
+      const overview = await pages.overview();
+      expect(overview.margins).toBe(1);
+      expect(overview.money.length).toBeGreaterThan(0);
     } finally {
       // Later browser tests share the demo workspace and expect costs kept from production.
       await signInAs("mara@fenwicklane.example");

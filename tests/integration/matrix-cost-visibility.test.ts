@@ -12,6 +12,7 @@ import { GET as getIngredients } from "@/app/api/ingredients/route";
 import { GET as getLot } from "@/app/api/lots/[lotId]/route";
 import { POST as postLeastCost } from "@/app/api/least-cost/route";
 import { GET as getLots } from "@/app/api/lots/route";
+import { GET as getOverview } from "@/app/api/overview/route";
 import { GET as getCurrentPrices } from "@/app/api/prices/current/route";
 import { GET as exportQuotes } from "@/app/api/quotes/export/route";
 import { GET as getQuotes } from "@/app/api/quotes/route";
@@ -94,6 +95,19 @@ function rows(shared: boolean): MatrixRow[] {
           await getRecipes(get("/api/recipes?sort=cost"), params()),
           (b) => b.costsShown === true,
           (b) => b.costsShown === false && (b.rows as Rows).every((r) => r.costPerBar === null),
+        );
+      },
+    },
+    {
+      name: "GET /api/overview (margins of released bars)",
+      permission: right("workspace.read"),
+      outsider: "ok", // the outsider's own workspace
+      run: async (ctx) => {
+        await prepare(ctx);
+        return moneyOutcome(
+          await getOverview(get("/api/overview"), params()),
+          (b) => b.margins !== null && typeof b.margins === "object",
+          (b) => b.margins === null && !JSON.stringify(b).toLowerCase().includes("price"),
         );
       },
     },

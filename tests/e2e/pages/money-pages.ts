@@ -32,6 +32,13 @@ export class MoneyPages {
     return { headers: await this.page.getByRole("columnheader").allTextContents(), money: await this.mainMoney() };
   }
 
+  /** The overview: whether it has the margins card, and the money on it. */
+  async overview() {
+    await this.page.goto(`${E2E_BASE_URL}/overview`);
+    await this.page.locator('[data-testid="overview-production"]:visible').waitFor();
+    return { margins: await this.page.locator('[data-testid="overview-margins"]:visible').count(), money: await this.mainMoney() };
+  }
+
   /** The owner's switch on the Costing page; waits for the saved message. */
   async shareCosts(show: boolean) {
     await this.page.goto(`${E2E_BASE_URL}/costing`);

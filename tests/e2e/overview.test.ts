@@ -1,0 +1,58 @@
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { E2E_BASE_URL } from "./config";
+import { onePagePerFile } from "./page-per-file";
+import { signInFresh } from "./pages/sign-in-page";
+
+let page: Page;
+onePagePerFile((opened) => (page = opened));
+
+/** Visible copies only: a streamed page may hold a hidden duplicate for a moment. */
+const visible = (testId: string) => page.locator(`[data-testid="${testId}"]:visible`);
+
+// The demo's recipes, prices and targets are invented (db/demo/*.ts); the figures are checked against the Costing page.
+describe("the overview", () => {
+  it("shows the owner each released bar's cost and margin, the same cost the bar's Costing page gives", async () => {
+    await signInFresh(page, "mara@fenwicklane.example");
+    await page.goto(`${E2E_BASE_URL}/overview`);
+    const margins = visible("overview-margins");
+    await margins.waitFor();
+    for (const card of ["overview-production", "overview-beans", "overview-unreleased", "overview-quotes"]) await visible(card).waitFor();
+    const row = margins.getByRole("row").filter({ hasText: "House dark 70 %" });
+    const costCell = row.getByRole("cell").nth(1);
+    const cost = (await costCell.textContent())?.trim();
+    expect(cost).toMatch(/^EUR \d+\.\d{3}$/);
+    expect(await row.getByTestId("wholesale-margin").textContent()).toMatch(/\d+\.\d %/);
+    await row.getByRole("link", { name: "House dark 70 %" }).click();
+    await page.waitForURL(/\/costing\/[0-9a-f-]{36}\?version=\d+$/);
+    await page.locator('[data-testid="scenario-chosen-per-bar"]:visible').waitFor();
+    expect((await page.locator('[data-testid="scenario-chosen-per-bar"]:visible').textContent())?.trim()).toBe(cost);
+  });
+
+  it("fits a phone's width: the margins table scrolls inside its card, the page does not", async () => {
+    await page.setViewportSize({ width: 390, height: 844 });
+    try {
+      await page.goto(`${E2E_BASE_URL}/overview`);
+      await visible("overview-margins").waitFor();
+      const { scroll, client } = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, client: document.documentElement.clientWidth }));
+      expect(scroll).toBeLessThanOrEqual(client);
+    } finally {
+      await page.setViewportSize({ width: 1280, height: 900 });
+    }
+  });
+
+  it("lists planned batches with a link to the batch sheet, and leaves margins and prices out for production", async () => {
+    await signInFresh(page, "joss@fenwicklane.example");
+    await page.goto(`${E2E_BASE_URL}/overview`);
+    const production = visible("overview-production");
+    await production.waitFor();
+    expect(await visible("overview-margins").count()).toBe(0);
+    expect(await visible("overview-quotes").count()).toBe(0);
+    expect(await visible("overview-unreleased").count()).toBe(0);
+    const batch = production.getByRole("link", { name: /^B-\d{4}-\d{4}$/ }).first();
+    const code = await batch.textContent();
+    await batch.click();
+    await page.waitForURL(/\/batches\/[0-9a-f-]{36}$/);
+    expect(await page.locator('[data-testid="batch-code"]:visible').textContent()).toBe(code);
+  });
+});
