@@ -48,7 +48,7 @@ export function PlanForm({
   }, [result, router]);
   const err = (f: string) => fieldError(result, f);
   return (
-    <div className="grid gap-6 lg:grid-cols-[1fr_24rem]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
       <form action={action} className="space-y-5" noValidate aria-label="Plan a batch">
         <FormAlert result={result?.ok ? null : result} />
         <Field id="recipeId" label="Recipe (released version)" error={err("recipeId")}>

@@ -177,7 +177,7 @@ export function Bench({ recipe, base, library, currency, canEdit, showCosts, lot
   }
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <div className="space-y-6">
         {state.restoredAt ? <DraftBanner keptAt={state.restoredAt} baseVersionNo={draftBase} latestVersionNo={base.versionNo} onDiscard={discardRestored} /> : null}
         <Card>

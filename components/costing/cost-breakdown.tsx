@@ -28,7 +28,7 @@ export function CostBreakdown({ scenario, settings, currency, barMassGrams }: { 
   }
   const b = cost.breakdown;
   return (
-    <div className="grid gap-6 lg:grid-cols-2">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
       <Card>
         <CardHeader title="Cost of one bar" description={`Chosen combination, bar of ${new Decimal(barMassGrams).toFixed()} g, in ${currency}.`} />
         <dl className="divide-y divide-sand-light text-sm">

@@ -71,7 +71,7 @@ export function CostSettingsForm({ recipeId, settings, revision, currency, canEd
   return (
     <form onSubmit={submit} noValidate aria-label="Cost settings" className="space-y-6">
       <FormAlert result={result?.ok ? { ok: true, message: `Saved as revision ${result.data.revision}.` } : result} />
-      <fieldset disabled={!canEdit || pending} className="grid gap-6 lg:grid-cols-2">
+      <fieldset disabled={!canEdit || pending} className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         {GROUPS.map((g) => (
           <div key={g.title} className="space-y-3">
             <h3 className="text-sm font-bold uppercase tracking-wide text-cocoa-500">{g.title}</h3>

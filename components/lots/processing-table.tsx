@@ -30,34 +30,36 @@ function details(r: Row["record"]): string {
 export function ProcessingTable({ records, showCost }: { records: Row[]; showCost: boolean }) {
   if (records.length === 0) return <p className="text-sm text-cocoa-500">Nothing recorded yet.</p>;
   return (
-    <table className="figures w-full text-sm" data-testid="processing-records">
-      <thead>
-        <tr className="text-left text-xs uppercase tracking-wide text-cocoa-500">
-          <th className="px-2 py-1.5">Date</th>
-          <th className="px-2 py-1.5">Step</th>
-          <th className="px-2 py-1.5 text-right">In</th>
-          <th className="px-2 py-1.5 text-right">Out</th>
-          <th className="px-2 py-1.5">Details</th>
-          {showCost ? <th className="px-2 py-1.5 text-right">Cost</th> : null}
-          <th className="px-2 py-1.5">By</th>
-        </tr>
-      </thead>
-      <tbody>
-        {records.map(({ record: r, performedBy }) => (
-          <tr key={r.id} className="border-t border-sand-light align-top">
-            <td className="px-2 py-1.5">{formatDate(r.performedOn)}</td>
-            <td className="px-2 py-1.5 font-semibold">{stepName[r.step]}</td>
-            <td className="px-2 py-1.5 text-right">{formatKg(r.massInKg)}</td>
-            <td className="px-2 py-1.5 text-right">{formatKg(r.massOutKg)}</td>
-            <td className="px-2 py-1.5">
-              {details(r)}
-              {r.notes ? <span className="block text-xs text-cocoa-500">{r.notes}</span> : null}
-            </td>
-            {showCost ? <td className="px-2 py-1.5 text-right">{r.cost ? formatMoney(r.cost, "") : "—"}</td> : null}
-            <td className="px-2 py-1.5">{performedBy ?? "—"}</td>
+    <div className="overflow-x-auto">
+      <table className="figures w-full text-sm" data-testid="processing-records">
+        <thead>
+          <tr className="text-left text-xs uppercase tracking-wide text-cocoa-500">
+            <th className="px-2 py-1.5">Date</th>
+            <th className="px-2 py-1.5">Step</th>
+            <th className="px-2 py-1.5 text-right">In</th>
+            <th className="px-2 py-1.5 text-right">Out</th>
+            <th className="px-2 py-1.5">Details</th>
+            {showCost ? <th className="px-2 py-1.5 text-right">Cost</th> : null}
+            <th className="px-2 py-1.5">By</th>
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {records.map(({ record: r, performedBy }) => (
+            <tr key={r.id} className="border-t border-sand-light align-top">
+              <td className="px-2 py-1.5">{formatDate(r.performedOn)}</td>
+              <td className="px-2 py-1.5 font-semibold">{stepName[r.step]}</td>
+              <td className="px-2 py-1.5 text-right">{formatKg(r.massInKg)}</td>
+              <td className="px-2 py-1.5 text-right">{formatKg(r.massOutKg)}</td>
+              <td className="px-2 py-1.5">
+                {details(r)}
+                {r.notes ? <span className="block text-xs text-cocoa-500">{r.notes}</span> : null}
+              </td>
+              {showCost ? <td className="px-2 py-1.5 text-right">{r.cost ? formatMoney(r.cost, "") : "—"}</td> : null}
+              <td className="px-2 py-1.5">{performedBy ?? "—"}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
   );
 }

@@ -28,7 +28,7 @@ export default async function OverviewPage() {
           Signed in as {viewer.user.name}, <span className="font-semibold">{viewer.role}</span>. As of {formatDate(overview.on)}.
         </p>
       </div>
-      <div className="grid gap-6 lg:grid-cols-2 [&>*]:min-w-0">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         {overview.margins ? <MarginsCard margins={overview.margins} /> : null}
         <ProductionCard batches={overview.batches} orders={overview.orders} />
         <BeansCard beans={overview.beans} />

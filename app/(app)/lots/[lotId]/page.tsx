@@ -58,7 +58,7 @@ export default async function LotPage({ params }: { params: Promise<{ lotId: str
           ))}
         </dl>
       </div>
-      <div className={nibCost ? "grid gap-6 lg:grid-cols-[1fr_22rem]" : undefined}>
+      <div className={nibCost ? "grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]" : undefined}>
         <Card>
           <CardHeader title="From beans to nibs" description="Mass after each step, and each step's yield against the usual range." />
           <YieldChain received={lot.massReceivedKg} chain={chain} />
@@ -84,7 +84,7 @@ export default async function LotPage({ params }: { params: Promise<{ lotId: str
           </div>
         ) : null}
       </Card>
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         <Card>
           <CardHeader title="Cut tests" description="Beans cut lengthwise from a sample, counted by what their inside shows." />
           <CutTestTable tests={detail.cutTests} />

@@ -50,7 +50,7 @@ export default async function ComparePage({
       <RecipeHeader recipe={recipe} current="history" readsAll={readsAll} />
       <div className="space-y-6">
         <CompareForm recipeId={recipe.id} versions={[...numbers].reverse()} a={a} b={b} />
-        <div className="grid gap-6 lg:grid-cols-2">
+        <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
           <Card data-testid="compare-lines">
             <CardHeader title="Lines" description={`${la}: ${va.note ?? "no note"} · ${lb}: ${vb.note ?? "no note"}`} />
             <DiffTable rows={diffLines(va.lines, vb.lines)} a={la} b={lb} format={(v) => pct(v, 2)} unit="%" />

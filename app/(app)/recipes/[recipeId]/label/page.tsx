@@ -56,7 +56,7 @@ export default async function LabelPage({ params, searchParams }: { params: Prom
               />
               <LabelDownloads recipeId={recipe.id} versionNo={loaded.version.versionNo} />
             </div>
-            <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_24rem]">
+            <div className="grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,1fr)_24rem]">
               <div className="self-start overflow-hidden rounded-card border border-sand shadow-card">
                 <LabelSheet name={recipe.name} barMassGrams={loaded.version.barMassGrams} versionNo={loaded.version.versionNo} view={loaded.view} />
               </div>

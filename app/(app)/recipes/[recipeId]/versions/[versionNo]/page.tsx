@@ -40,7 +40,7 @@ export default async function VersionPage({ params }: { params: Promise<{ recipe
           {version.note ? ` — “${version.note}”` : ""}
         </p>
       </div>
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="space-y-6">
           <VersionLinesCard version={version} currency={currency} showCost={costsShown} />
           <StandardsPanel standards={version.evaluation.standards} chosen={AUTHORITIES} chocolateType={recipe.chocolateType} />
