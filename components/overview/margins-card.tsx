@@ -80,7 +80,7 @@ export function MarginsCard({ margins }: { margins: Few<ReleasedMargin> }) {
           </tbody>
         </Table>
       )}
-      {margins.rows.length > 0 && margins.rows[0]!.costPerBar !== null ? (
+      {margins.rows.length > 0 ? (
         <p className="mt-3 text-xs text-cocoa-500">Margin is gross margin on the selling price: (price − cost) ÷ price. Targets are set per recipe on Costing.</p>
       ) : null}
       <FewFooter shown={margins.rows.length} total={margins.total} href="/costing" where="Costing" />
