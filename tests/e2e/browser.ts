@@ -43,14 +43,28 @@ export async function launchBrowser(): Promise<BrowserContext> {
  * React streams a page's content into a hidden segment (`<div hidden id="S:0">`) and
  * reveals it a moment later, batched on an animation frame; Playwright's "load" can come
  * in between, and while React swaps the segment in, the same test ids may exist twice
- * (a strict-mode error in a locator). So every `page.goto` of our contexts returns only
- * once no hidden segment is left (bounded: 10 s, then the test's own waits decide).
+ * (a strict-mode error in a locator). So every `page.goto`, `page.reload` and
+ * `page.waitForURL` of our contexts (the last covers a link or a GET form that loads a
+ * new document) returns only once no hidden segment is left (bounded: 10 s, then the
+ * test's own waits decide).
  */
 function settleAfterGoto(page: Page): void {
+  const settled = () => page.waitForFunction(() => !document.querySelector('div[hidden][id^="S:"]'), undefined, { timeout: 10_000 }).catch(() => undefined);
   const goto = page.goto.bind(page);
   page.goto = async (url, options) => {
     const response = await goto(url, options);
-    await page.waitForFunction(() => !document.querySelector('div[hidden][id^="S:"]'), undefined, { timeout: 10_000 }).catch(() => undefined);
+    await settled();
     return response;
+  };
+  const reload = page.reload.bind(page);
+  page.reload = async (options) => {
+    const response = await reload(options);
+    await settled();
+    return response;
+  };
+  const waitForURL = page.waitForURL.bind(page);
+  page.waitForURL = async (url, options) => {
+    await waitForURL(url, options);
+    await settled();
   };
 }
