@@ -14,7 +14,7 @@ export function QuotesCard({ quotes }: { quotes: Few<QuoteToCheck> }) {
         description="Current quotes that end within 30 days with no newer quote entered, and quotes in effect for more than six months."
       />
       {quotes.rows.length === 0 ? (
-        <p className="text-sm text-cocoa-500">Every current quote is recent and open-ended or renewed.</p>
+        <p className="text-sm text-cocoa-500">No current quote needs checking.</p>
       ) : (
         <ul className="divide-y divide-sand-light text-sm">
           {quotes.rows.map((q) => (

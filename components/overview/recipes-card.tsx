@@ -10,7 +10,7 @@ export function UnreleasedCard({ recipes }: { recipes: Few<UnreleasedRecipe> }) 
     <Card data-testid="overview-unreleased">
       <CardHeader title="Changes not released" description="Recipes saved since their released version. Production keeps making the released one until a newer version is released." />
       {recipes.rows.length === 0 ? (
-        <p className="text-sm text-cocoa-500">Every recipe&apos;s latest version is released.</p>
+        <p className="text-sm text-cocoa-500">Nothing is waiting for release.</p>
       ) : (
         <ul className="divide-y divide-sand-light text-sm">
           {recipes.rows.map((r) => (

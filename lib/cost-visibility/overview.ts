@@ -4,6 +4,7 @@ import type { Viewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 import {
   getBeansOnHand,
+  getSetupProgress,
   listOpenPurchaseOrders,
   listPlannedBatches,
   listQuotesToCheck,
@@ -15,6 +16,7 @@ import {
   type PlannedBatch,
   type QuoteToCheck,
   type ReleasedMargin,
+  type SetupProgress,
   type UnreleasedRecipe,
 } from "@/lib/data/overview";
 
@@ -24,10 +26,12 @@ import {
  * "show costs to everyone" setting included); recipes with unsaved releases
  * only for roles that read every version; prices to chase only for those who
  * enter quotes. Batches, orders and beans are everyone's (batches.read,
- * lots.read). No money outside `margins`.
+ * lots.read). `setup` is the owner's checklist of first steps while any is
+ * left. No money outside `margins`.
  */
 export type Overview = {
   on: string;
+  setup: SetupProgress | null;
   margins: Few<ReleasedMargin> | null;
   batches: Few<PlannedBatch>;
   orders: Few<OpenOrder>;
@@ -39,7 +43,8 @@ export type Overview = {
 export async function getOverviewForViewer({ viewer, on }: { viewer: Viewer; on: string }): Promise<Overview> {
   const workspaceId = viewer.workspace.id;
   const costsShown = await canSeeCosts(viewer);
-  const [margins, batches, orders, beans, unreleased, quotes] = await Promise.all([
+  const [setup, margins, batches, orders, beans, unreleased, quotes] = await Promise.all([
+    viewer.role === "owner" ? getSetupProgress({ workspaceId }).then((steps) => (steps.every((s) => s.done) ? null : steps)) : null,
     costsShown ? listReleasedMargins({ workspaceId, on }) : null,
     listPlannedBatches({ workspaceId, on }),
     listOpenPurchaseOrders({ workspaceId }),
@@ -47,5 +52,5 @@ export async function getOverviewForViewer({ viewer, on }: { viewer: Viewer; on:
     can(viewer.role, "recipes.read") ? listUnreleasedChanges({ workspaceId }) : null,
     can(viewer.role, "suppliers.edit") ? listQuotesToCheck({ workspaceId, on }) : null,
   ]);
-  return { on, margins, batches, orders, beans, unreleased, quotes };
+  return { on, setup, margins, batches, orders, beans, unreleased, quotes };
 }

@@ -2,7 +2,7 @@ import "server-only";
 import Decimal from "decimal.js";
 import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { batches, beanLots, ingredients, priceQuotes, purchaseOrders, recipes, suppliers } from "@/db/schema";
+import { batches, beanLots, ingredients, memberships, priceQuotes, purchaseOrders, recipes, suppliers } from "@/db/schema";
 import type { MoneyResult } from "@/lib/formulation";
 import { quotesToCheck } from "@/lib/pricing/quote-checks";
 import { loadRecipeCosting } from "./costing";
@@ -235,4 +235,33 @@ export async function listReleasedMargins({ workspaceId, on, limit = 8 }: { work
     }),
   );
   return { rows, total: total?.n ?? 0 };
+}
+
+export type SetupStep = "supplier" | "quote" | "recipe" | "release" | "lot" | "batch" | "team";
+
+/** The first things a new workspace does, in order; `done` from what its tables hold. */
+export type SetupProgress = { step: SetupStep; done: boolean }[];
+
+const SETUP_ORDER: SetupStep[] = ["supplier", "quote", "recipe", "release", "lot", "batch", "team"];
+
+/**
+ * How far a workspace has come from an empty start: a supplier, a price, a
+ * saved recipe, a released version, a bean lot, a batch, a second person.
+ * One round trip of EXISTS checks, each on an index led by workspace_id.
+ */
+export async function getSetupProgress({ workspaceId }: { workspaceId: string }): Promise<SetupProgress> {
+  const exists = (table: typeof suppliers | typeof priceQuotes | typeof beanLots | typeof batches) =>
+    sql<boolean>`exists (select 1 from ${table} where ${table.workspaceId} = ${workspaceId})`;
+  const [row] = await db
+    .select({
+      supplier: exists(suppliers),
+      quote: exists(priceQuotes),
+      recipe: sql<boolean>`exists (select 1 from ${recipes} where ${recipes.workspaceId} = ${workspaceId} and ${recipes.latestVersionNo} > 0)`,
+      release: sql<boolean>`exists (select 1 from ${recipes} where ${recipes.workspaceId} = ${workspaceId} and ${recipes.releasedVersionNo} is not null)`,
+      lot: exists(beanLots),
+      batch: exists(batches),
+      team: sql<boolean>`(select count(*) from ${memberships} where ${memberships.workspaceId} = ${workspaceId}) > 1`,
+    })
+    .from(sql`(select 1) as one`);
+  return SETUP_ORDER.map((step) => ({ step, done: row?.[step] === true }));
 }

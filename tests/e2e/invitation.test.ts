@@ -33,6 +33,11 @@ describe("a new workspace inviting its buyer", () => {
     await page.getByRole("button", { name: "Create workspace" }).click();
     await page.waitForURL(`${E2E_BASE_URL}/overview`);
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe(`Kestrel Cocoa ${tag}`);
+    // A new workspace's owner gets the first steps, none of them done yet.
+    const setup = page.locator('[data-testid="overview-setup"]:visible');
+    await setup.waitFor();
+    expect(await setup.locator("li[data-done=true]").count()).toBe(0);
+    expect(await setup.getByRole("link", { name: "Invite your team" }).getAttribute("href")).toBe("/settings/members");
 
     // … invites a buyer …
     const team = new TeamPage(page);

@@ -84,6 +84,10 @@ describe("the overview of the demo workspace", () => {
     ]);
   });
 
+  it("has done every first step, so the owner gets no checklist", async () => {
+    expect((await getOverviewForViewer({ viewer: viewerOf(demo, "owner"), on })).setup).toBeNull();
+  });
+
   it("lists the recipes saved since their release, and the current quotes older than six months, oldest first", async () => {
     const { unreleased, quotes } = await getOverviewForViewer({ viewer: viewerOf(demo, "owner"), on });
     // Deep dark 82 % is released at its latest version; the four others have a newer saved version.
@@ -123,6 +127,19 @@ describe("what each role gets", () => {
     expect(o.unreleased !== null).toBe(unreleased);
     expect(o.quotes !== null).toBe(quotes);
     expect(o.batches).toEqual({ rows: [], total: 0 });
+    expect(o.setup !== null).toBe(role === "owner");
+  });
+
+  it("gives the owner of a new workspace its first steps, ticking each as the workspace holds it", async () => {
+    const fresh = await createTeam("overview-setup");
+    const owner = viewerOf(fresh.workspaceId, "owner");
+    const done = async () => Object.fromEntries((await getOverviewForViewer({ viewer: owner, on })).setup!.map((s) => [s.step, s.done]));
+    // createTeam gives the workspace one member per role, so only the team step is done.
+    expect(await done()).toEqual({ supplier: false, quote: false, recipe: false, release: false, lot: false, batch: false, team: true });
+    const supplier = await makeSupplier(fresh.workspaceId);
+    const sugar = await makeIngredient(fresh.workspaceId);
+    await makeQuote(fresh.workspaceId, fresh.people.buyer.id, { supplierId: supplier.id, ingredientId: sugar.id, price: "1.05", validFrom: "2026-11-01" });
+    expect(await done()).toMatchObject({ supplier: true, quote: true, recipe: false });
   });
 
   it("gives production and viewers the margins once the owner shows costs to everyone", async () => {

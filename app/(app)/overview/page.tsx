@@ -3,6 +3,7 @@ import { BeansCard } from "@/components/overview/beans-card";
 import { MarginsCard } from "@/components/overview/margins-card";
 import { ProductionCard } from "@/components/overview/production-card";
 import { QuotesCard } from "@/components/overview/quotes-card";
+import { SetupCard } from "@/components/overview/setup-card";
 import { UnreleasedCard } from "@/components/overview/recipes-card";
 import { Badge } from "@/components/ui/badge";
 import { Card, CardHeader } from "@/components/ui/card";
@@ -29,6 +30,7 @@ export default async function OverviewPage() {
         </p>
       </div>
       <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
+        {overview.setup ? <SetupCard setup={overview.setup} /> : null}
         {overview.margins ? <MarginsCard margins={overview.margins} /> : null}
         <ProductionCard batches={overview.batches} orders={overview.orders} />
         <BeansCard beans={overview.beans} />
