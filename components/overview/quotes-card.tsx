@@ -36,7 +36,7 @@ export function QuotesCard({ quotes }: { quotes: Few<QuoteToCheck> }) {
           ))}
         </ul>
       )}
-      <FewFooter shown={quotes.rows.length} total={quotes.total} href="/prices" where="Prices" />
+      <FewFooter shown={quotes.rows.length} total={quotes.total} href="/prices#to-check" where="Prices" />
     </Card>
   );
 }

@@ -54,6 +54,20 @@ describe("the overview", () => {
     }
   });
 
+  it("gives the buyer the prices to check, on the overview and in full on the Prices page", async () => {
+    await signInFresh(page, "priya@fenwicklane.example");
+    await page.goto(`${E2E_BASE_URL}/overview`);
+    // The demo's Holloway skim milk powder quote took effect on 2026-02-01 (invented), over six months ago.
+    await visible("overview-quotes").getByText("Skim milk powder").waitFor();
+    await page.goto(`${E2E_BASE_URL}/prices#to-check`);
+    const card = visible("prices-to-check");
+    await card.waitFor();
+    const row = card.getByRole("row").filter({ hasText: "Skim milk powder" });
+    expect(await row.textContent()).toContain("Holloway Dairy Powders");
+    expect(await row.textContent()).toContain("over six months old");
+    expect(await visible("overview-quotes").count()).toBe(0);
+  });
+
   it("lists planned batches with a link to the batch sheet, and leaves margins and prices out for production", async () => {
     await signInFresh(page, "joss@fenwicklane.example");
     await page.goto(`${E2E_BASE_URL}/overview`);

@@ -3,11 +3,14 @@ import Link from "next/link";
 import { CostsNotAllowed } from "@/components/costing/costs-not-allowed";
 import { PriceListHistory } from "@/components/prices/price-list-history";
 import { QuotesTable } from "@/components/prices/quotes-table";
+import { QuotesToCheck } from "@/components/prices/quotes-to-check";
 import { Button } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
 import { canSeeCosts } from "@/lib/auth/costs";
 import { requireViewer } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
+import { listQuotesToCheck } from "@/lib/data/overview";
+import { isoDay } from "@/lib/pricing/convert";
 
 export const metadata: Metadata = { title: "Prices" };
 
@@ -15,6 +18,7 @@ export default async function PricesPage() {
   const viewer = await requireViewer();
   if (!(await canSeeCosts(viewer))) return <CostsNotAllowed />;
   const buyer = can(viewer.role, "suppliers.edit");
+  const toCheck = buyer ? await listQuotesToCheck({ workspaceId: viewer.workspace.id, on: isoDay(new Date()), limit: 100 }) : null;
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-end justify-between gap-4">
@@ -41,6 +45,7 @@ export default async function PricesPage() {
           ) : null}
         </div>
       </div>
+      {toCheck ? <QuotesToCheck quotes={toCheck} /> : null}
       <QuotesTable />
       <Card>
         <CardHeader title="Recent price-list uploads" />
