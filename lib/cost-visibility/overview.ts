@@ -23,11 +23,11 @@ import {
 /**
  * The overview of one viewer: each part is null when the role has no use for
  * it or may not see it. Margins only for those who may see costs (the owner's
- * "show costs to everyone" setting included); recipes with unsaved releases
- * only for roles that read every version; prices to chase only for those who
+ * "show costs to everyone" setting included); recipes saved since their
+ * release only for roles that read every version; prices to chase only for those who
  * enter quotes. Batches, orders and beans are everyone's (batches.read,
- * lots.read). `setup` is the owner's checklist of first steps while any is
- * left. No money outside `margins`.
+ * lots.read). `setup` is the checklist of first steps, for whoever
+ * manages the workspace's people (the owner), while any step is left. No money outside `margins`.
  */
 export type Overview = {
   on: string;
@@ -44,7 +44,7 @@ export async function getOverviewForViewer({ viewer, on }: { viewer: Viewer; on:
   const workspaceId = viewer.workspace.id;
   const costsShown = await canSeeCosts(viewer);
   const [setup, margins, batches, orders, beans, unreleased, quotes] = await Promise.all([
-    viewer.role === "owner" ? getSetupProgress({ workspaceId }).then((steps) => (steps.every((s) => s.done) ? null : steps)) : null,
+    can(viewer.role, "members.manage") ? getSetupProgress({ workspaceId }).then((steps) => (steps.every((s) => s.done) ? null : steps)) : null,
     costsShown ? listReleasedMargins({ workspaceId, on }) : null,
     listPlannedBatches({ workspaceId, on }),
     listOpenPurchaseOrders({ workspaceId }),
