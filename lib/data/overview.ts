@@ -12,8 +12,9 @@ import { plain } from "./numeric";
 
 /**
  * What the overview lists: a few rows of each kind of thing waiting on someone,
- * with how many there are in all. Every query is bounded (`limit`), so the page
- * costs the same in a workspace with thousands of recipes or quotes' history.
+ * with how many there are in all. Batches, orders, recipes and margins read only
+ * `limit` rows (and a count); the price check reads a few columns of every quote
+ * (its dates decide), and the bean summary every lot in use with its records.
  */
 export type Few<T> = { rows: T[]; total: number };
 
