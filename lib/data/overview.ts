@@ -9,6 +9,7 @@ import { loadRecipeCosting } from "./costing";
 import { getNibStock } from "./nib-stock";
 import { orderListColumns, type OrderListRow } from "./purchase-orders";
 import { plain } from "./numeric";
+import { quotePairColumns } from "./quotes";
 
 /**
  * What the overview lists: a few rows of each kind of thing waiting on someone,
@@ -118,11 +119,7 @@ export type QuoteToCheck = {
 export async function listQuotesToCheck({ workspaceId, on, limit = 6 }: { workspaceId: string; on: string; limit?: number }): Promise<Few<QuoteToCheck>> {
   const rows = await db
     .select({
-      id: priceQuotes.id,
-      supplierId: priceQuotes.supplierId,
-      supplierName: suppliers.name,
-      ingredientId: priceQuotes.ingredientId,
-      ingredientName: ingredients.name,
+      ...quotePairColumns,
       validFrom: priceQuotes.validFrom,
       validUntil: priceQuotes.validUntil,
       createdAt: priceQuotes.createdAt,

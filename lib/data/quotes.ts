@@ -36,6 +36,15 @@ export type QuoteRecord = {
   current: boolean;
 };
 
+/** A quote's id with its supplier and ingredient by id and name (join `suppliers` and `ingredients` on the quote). */
+export const quotePairColumns = {
+  id: priceQuotes.id,
+  supplierId: priceQuotes.supplierId,
+  supplierName: suppliers.name,
+  ingredientId: priceQuotes.ingredientId,
+  ingredientName: ingredients.name,
+};
+
 const creator = alias(users, "creator");
 
 /**
@@ -60,11 +69,7 @@ export async function listQuotes({
   const [rows, baseCurrency, rates] = await Promise.all([
     db
       .select({
-        id: priceQuotes.id,
-        supplierId: priceQuotes.supplierId,
-        supplierName: suppliers.name,
-        ingredientId: priceQuotes.ingredientId,
-        ingredientName: ingredients.name,
+        ...quotePairColumns,
         price: priceQuotes.price,
         currency: priceQuotes.currency,
         unit: priceQuotes.unit,
